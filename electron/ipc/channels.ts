@@ -1,0 +1,93 @@
+/**
+ * The one channel map: every request the renderer may make, with a zod schema for the request
+ * and one for the successful response. The desktop preload, the main-process handlers and the
+ * browser host are all built from this map, so what the browser tests exercise is exactly what
+ * the desktop app runs. Nothing outside this file decides what the renderer may ask for.
+ */
+import { z } from 'zod';
+import { engine, engineInput, part, partInput, partKind, plan, planInput, reading, readingInput } from '../../db/schema.js';
+
+const id = z.number().int().positive();
+const byId = z.object({ id });
+
+export const engineSummary = z.object({
+  id,
+  name: z.string(),
+  yearText: z.string(),
+  modelText: z.string(),
+  cylinders: z.number(),
+  systemVoltageV: z.number(),
+  earthPolarity: z.string(),
+  planCount: z.number().int().min(0),
+});
+
+export const channels = {
+  'app.info': {
+    request: z.object({}),
+    response: z.object({ version: z.string(), dataDir: z.string(), schemaVersion: z.number().int(), host: z.enum(['desktop', 'browser']) }),
+  },
+  'demo.load': {
+    request: z.object({}),
+    response: z.object({ enginesAdded: z.number().int(), partsAdded: z.number().int(), plansAdded: z.number().int() }),
+  },
+  'engines.list': { request: z.object({}), response: z.array(engineSummary) },
+  'engines.get': { request: byId, response: engine },
+  'engines.create': { request: z.object({ engine: engineInput }), response: engine },
+  'engines.update': { request: z.object({ id, engine: engineInput }), response: engine },
+  /** Refused with IN_USE while plans use the engine, unless the user has confirmed the cascade. */
+  'engines.delete': {
+    request: z.object({ id, deletePlansToo: z.boolean() }),
+    response: z.object({ deleted: z.literal(true), plansDeleted: z.number().int() }),
+  },
+  'parts.list': { request: z.object({ kind: partKind.optional() }), response: z.array(part) },
+  'parts.get': { request: byId, response: part },
+  'parts.create': { request: z.object({ part: partInput }), response: part },
+  'parts.update': { request: z.object({ id, part: partInput }), response: part },
+  'parts.delete': { request: byId, response: z.object({ deleted: z.literal(true) }) },
+  'plans.list': { request: z.object({ engineId: id.optional() }), response: z.array(plan) },
+  'plans.get': { request: byId, response: plan },
+  'plans.create': { request: z.object({ plan: planInput }), response: plan },
+  'plans.update': { request: z.object({ id, plan: planInput }), response: plan },
+  'plans.delete': { request: byId, response: z.object({ deleted: z.literal(true), readingsDeleted: z.number().int() }) },
+  'readings.list': { request: z.object({ planId: id }), response: z.array(reading) },
+  'readings.add': { request: z.object({ reading: readingInput }), response: reading },
+  'readings.delete': { request: byId, response: z.object({ deleted: z.literal(true) }) },
+} as const;
+
+export type Channels = typeof channels;
+export type ChannelName = keyof Channels;
+export type RequestOf<C extends ChannelName> = z.input<Channels[C]['request']>;
+export type ResponseOf<C extends ChannelName> = z.output<Channels[C]['response']>;
+
+export const errorCodes = [
+  'INVALID_INPUT', // the request did not match its schema; `fields` says which and why
+  'NOT_FOUND', // the id names nothing in the store
+  'IN_USE', // deleting would orphan something; the user must confirm or move it first
+  'UNKNOWN_CHANNEL', // no such request in the map
+  'STORE_ERROR', // the database refused the write; nothing was changed
+  'UNSUPPORTED', // the request needs the desktop shell (printing, for example)
+  'INTERNAL', // a fault of ours; the message says what to report
+] as const;
+export type ErrorCode = (typeof errorCodes)[number];
+
+export const appError = z.object({
+  code: z.enum(errorCodes),
+  message: z.string(),
+  fields: z.record(z.string(), z.string()).optional(),
+});
+export type AppError = z.infer<typeof appError>;
+
+export type Result<T> = { ok: true; value: T } | { ok: false; error: AppError };
+
+/** The function the renderer calls; the same signature on both transports. */
+export type Invoke = <C extends ChannelName>(channel: C, request: RequestOf<C>) => Promise<Result<ResponseOf<C>>>;
+
+export function isChannelName(name: unknown): name is ChannelName {
+  return typeof name === 'string' && Object.prototype.hasOwnProperty.call(channels, name);
+}
+
+/** What the preload exposes and what the browser client builds: one function per channel. */
+export type BridgeApi = { [C in ChannelName]: (request: RequestOf<C>) => Promise<Result<ResponseOf<C>>> };
+
+/** The global name under which the bridge appears in the renderer. */
+export const bridgeGlobalName = 'ignitionBridge';
