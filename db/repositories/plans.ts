@@ -1,0 +1,125 @@
+/**
+ * Conversion plans: which module, coil, ballast, tach, leads and plug one engine would get.
+ * Each part reference must name a stored part of the right kind (a coil in `coilId`, and so on).
+ */
+import { plan as planSchema, planInput, type Plan, type PlanInput } from '../schema.js';
+import { StoreError } from '../errors.js';
+import { INVALID_SENTENCE, nowIso, parseInput, parseStored, partRefChecker, readAll, type RepoContext } from './shared.js';
+
+export type PlansRepository = {
+  /** Every plan, or one engine's (NOT_FOUND if that engine does not exist). */
+  list(engineId?: number): Plan[];
+  get(id: number): Plan;
+  create(input: PlanInput): Plan;
+  update(id: number, input: PlanInput): Plan;
+  /** Deletes the plan and its readings together. */
+  delete(id: number): { deleted: true; readingsDeleted: number };
+  count(): number;
+};
+
+type PlanRow = {
+  id: number;
+  engine_id: number;
+  name: string;
+  notes: string;
+  status: string;
+  module_id: number | null;
+  coil_id: number | null;
+  ballast_id: number | null;
+  tach_id: number | null;
+  leads_id: number | null;
+  plug_id: number | null;
+  cranking_bypass: number;
+  module_feed: string;
+  plug_gap_mm: number;
+  updated_at: string;
+};
+
+const COLUMNS = `engine_id, name, notes, status, module_id, coil_id, ballast_id, tach_id, leads_id, plug_id,
+  cranking_bypass, module_feed, plug_gap_mm`;
+const PARAMS = `@engineId, @name, @notes, @status, @moduleId, @coilId, @ballastId, @tachId, @leadsId, @plugId,
+  @crankingBypass, @moduleFeed, @plugGapMm`;
+
+function fromRow(row: PlanRow): Plan {
+  return parseStored(planSchema, 'plans', row.id, {
+    id: row.id,
+    engineId: row.engine_id,
+    name: row.name,
+    notes: row.notes,
+    status: row.status,
+    moduleId: row.module_id,
+    coilId: row.coil_id,
+    ballastId: row.ballast_id,
+    tachId: row.tach_id,
+    leadsId: row.leads_id,
+    plugId: row.plug_id,
+    crankingBypass: row.cranking_bypass === 1,
+    moduleFeed: row.module_feed,
+    plugGapMm: row.plug_gap_mm,
+    updatedAt: row.updated_at,
+  });
+}
+
+export function createPlansRepository(ctx: RepoContext): PlansRepository {
+  const { db } = ctx;
+  const checkParts = partRefChecker(db);
+  const select = `SELECT id, ${COLUMNS}, updated_at FROM plans`;
+  const s = {
+    all: db.prepare<[], PlanRow>(`${select} ORDER BY id`),
+    byEngine: db.prepare<[number], PlanRow>(`${select} WHERE engine_id = ? ORDER BY id`),
+    get: db.prepare<[number], PlanRow>(`${select} WHERE id = ?`),
+    engineExists: db.prepare<[number], { id: number }>('SELECT id FROM engines WHERE id = ?'),
+    insert: db.prepare(`INSERT INTO plans (${COLUMNS}, created_at, updated_at) VALUES (${PARAMS}, @now, @now)`),
+    update: db.prepare(`UPDATE plans SET (${COLUMNS}, updated_at) = (${PARAMS}, @now) WHERE id = @id`),
+    readingCount: db.prepare<[number], { n: number }>('SELECT COUNT(*) AS n FROM readings WHERE plan_id = ?'),
+    remove: db.prepare('DELETE FROM plans WHERE id = ?'),
+    count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM plans'),
+  };
+
+  function read(id: number): Plan {
+    const row = s.get.get(id);
+    if (!row) throw new StoreError('NOT_FOUND', `There is no plan with id ${id}; it may have been deleted.`);
+    return fromRow(row);
+  }
+
+  function validate(input: unknown): Record<string, unknown> {
+    const p = parseInput(planInput, input);
+    if (!s.engineExists.get(p.engineId)) {
+      throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, { engineId: `There is no engine with id ${p.engineId}.` });
+    }
+    checkParts([
+      { field: 'moduleId', id: p.moduleId, kind: 'module' },
+      { field: 'coilId', id: p.coilId, kind: 'coil' },
+      { field: 'ballastId', id: p.ballastId, kind: 'ballast' },
+      { field: 'tachId', id: p.tachId, kind: 'tach' },
+      { field: 'leadsId', id: p.leadsId, kind: 'leads' },
+      { field: 'plugId', id: p.plugId, kind: 'plug' },
+    ]);
+    return { ...p, crankingBypass: p.crankingBypass ? 1 : 0, now: nowIso() };
+  }
+
+  const deleteTx = db.transaction((id: number) => {
+    read(id);
+    const readingsDeleted = s.readingCount.get(id)!.n;
+    s.remove.run(id); // readings.plan_id cascades
+    return { deleted: true as const, readingsDeleted };
+  });
+
+  return {
+    list: (engineId) => {
+      if (engineId === undefined) return readAll(ctx, 'plans', s.all.all(), fromRow);
+      if (!s.engineExists.get(engineId)) throw new StoreError('NOT_FOUND', `There is no engine with id ${engineId}; it may have been deleted.`);
+      return readAll(ctx, 'plans', s.byEngine.all(engineId), fromRow);
+    },
+    get: (id) => read(id),
+    create: (input) => db.transaction(() => read(Number(s.insert.run(validate(input)).lastInsertRowid)))(),
+    update: (id, input) =>
+      db.transaction(() => {
+        read(id);
+        s.update.run({ ...validate(input), id });
+        return read(id);
+      })(),
+    delete: (id) => deleteTx(id),
+    count: () => s.count.get()!.n,
+  };
+}

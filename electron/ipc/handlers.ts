@@ -1,0 +1,94 @@
+/**
+ * One handler per channel in channels.ts. Handlers receive requests the dispatcher has already
+ * parsed; they call the repositories and translate the store's errors into the bridge's
+ * `AppFailure` codes, so the renderer sees the same envelope whatever went wrong.
+ */
+import Database from 'better-sqlite3';
+import { loadDemo } from '../../db/demo/index.js';
+import { StoreError } from '../../db/errors.js';
+import { SCHEMA_VERSION } from '../../db/open.js';
+import { createRepositories, type Repositories } from '../../db/repositories/index.js';
+import type { Handlers } from './dispatch.js';
+import { AppFailure } from './failure.js';
+
+export type HostInfo = { version: string; dataDir: string; host: 'desktop' | 'browser' };
+
+export function createHandlers(db: Database.Database, info: HostInfo): Handlers {
+  return handlersFor(createRepositories(db), info);
+}
+
+/** The same handlers over repositories the caller already built (the backend shares them with the demo loader). */
+export function handlersFor(repos: Repositories, info: HostInfo): Handlers {
+  return {
+    'app.info': () => ({ version: info.version, dataDir: info.dataDir, schemaVersion: SCHEMA_VERSION, host: info.host }),
+    'demo.load': guard(undefined, () => loadDemo(repos)),
+
+    'engines.list': guard(undefined, () => repos.engines.list()),
+    'engines.get': guard(undefined, (r) => repos.engines.get(r.id)),
+    'engines.create': guard('engine', (r) => repos.engines.create(r.engine)),
+    'engines.update': guard('engine', (r) => repos.engines.update(r.id, r.engine)),
+    'engines.delete': guard(undefined, (r) => repos.engines.delete(r.id, { deletePlansToo: r.deletePlansToo })),
+
+    'parts.list': guard(undefined, (r) => repos.parts.list(r.kind)),
+    'parts.get': guard(undefined, (r) => repos.parts.get(r.id)),
+    'parts.create': guard('part', (r) => repos.parts.create(r.part)),
+    'parts.update': guard('part', (r) => repos.parts.update(r.id, r.part)),
+    'parts.delete': guard(undefined, (r) => repos.parts.delete(r.id)),
+
+    'plans.list': guard(undefined, (r) => repos.plans.list(r.engineId)),
+    'plans.get': guard(undefined, (r) => repos.plans.get(r.id)),
+    'plans.create': guard('plan', (r) => repos.plans.create(r.plan)),
+    'plans.update': guard('plan', (r) => repos.plans.update(r.id, r.plan)),
+    'plans.delete': guard(undefined, (r) => repos.plans.delete(r.id)),
+
+    'readings.list': guard(undefined, (r) => repos.readings.list(r.planId)),
+    'readings.add': guard('reading', (r) => repos.readings.add(r.reading)),
+    'readings.delete': guard(undefined, (r) => repos.readings.delete(r.id)),
+  };
+}
+
+/**
+ * Runs a handler body and translates what the store throws. `fieldPrefix` is the request key
+ * that holds the record ('engine', 'part', ...), so a repository's `existing.coilPartId` comes
+ * back as `engine.existing.coilPartId`, the same path the dispatcher's own checks use.
+ */
+function guard<A, R>(fieldPrefix: string | undefined, body: (request: A) => R): (request: A) => R {
+  return (request) => {
+    try {
+      return body(request);
+    } catch (err) {
+      throw translateStoreError(err, fieldPrefix);
+    }
+  };
+}
+
+export function translateStoreError(err: unknown, fieldPrefix?: string): unknown {
+  if (err instanceof StoreError) {
+    switch (err.code) {
+      case 'NOT_FOUND':
+      case 'IN_USE':
+        return new AppFailure(err.code, err.message);
+      case 'INVALID_INPUT':
+        return new AppFailure('INVALID_INPUT', err.message, prefixFields(err.fields ?? {}, fieldPrefix));
+      case 'STORE_TOO_NEW':
+      case 'CORRUPT':
+        return new AppFailure('STORE_ERROR', err.message);
+    }
+  }
+  if (err instanceof Database.SqliteError) return new AppFailure('STORE_ERROR', sqliteSentence(err.code));
+  return err;
+}
+
+function prefixFields(fields: Record<string, string>, prefix: string | undefined): Record<string, string> {
+  if (prefix === undefined) return fields;
+  return Object.fromEntries(Object.entries(fields).map(([k, v]) => [k === '_' ? prefix : `${prefix}.${k}`, v]));
+}
+
+function sqliteSentence(code: string): string {
+  if (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED')) {
+    return 'The workshop file is busy (another copy of the app may be saving). Nothing was changed; try again in a moment.';
+  }
+  if (code.startsWith('SQLITE_READONLY')) return 'The workshop file cannot be written (it is read-only). Nothing was changed.';
+  if (code.startsWith('SQLITE_FULL')) return 'The disk is full, so the workshop file could not grow. Nothing was changed.';
+  return `The workshop file refused the change (${code}). Nothing was changed.`;
+}

@@ -1,0 +1,298 @@
+/**
+ * The migration chain and the way the file is opened. Real SQLite throughout: `:memory:` for each
+ * migration on its own, real files under the system temp folder for the chain, reopening and the
+ * refusal of a newer file. Pragma meanings are from the SQLite documentation (sqlite.org/pragma.html):
+ * synchronous FULL = 2, NORMAL = 1; journal_mode of an in-memory database is "memory".
+ */
+import Database from 'better-sqlite3';
+import { createHash } from 'node:crypto';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterEach, describe, expect, it } from 'vitest';
+import { StoreError } from '../../db/errors.js';
+import { migrations, type Migration } from '../../db/migrations/index.js';
+import { checkMigrationList, migrate, readUserVersion } from '../../db/migrations/runner.js';
+import { BUSY_TIMEOUT_MS, SCHEMA_VERSION, closeStore, openStore } from '../../db/open.js';
+import { createRepositories } from '../../db/repositories/index.js';
+import { coilIn, engineIn, tempDir } from './samples.js';
+
+const cleanups: Array<() => void> = [];
+afterEach(() => {
+  while (cleanups.length) cleanups.pop()!();
+});
+function temp(label: string): string {
+  const t = tempDir(label);
+  cleanups.push(t.cleanup);
+  return t.dir;
+}
+function sha(file: string): string {
+  return createHash('sha256').update(readFileSync(file)).digest('hex');
+}
+function rawMemory(): Database.Database {
+  const db = new Database(':memory:');
+  db.pragma('foreign_keys = ON');
+  return db;
+}
+function tables(db: Database.Database): string[] {
+  return db
+    .prepare<[], { name: string }>("SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name")
+    .all()
+    .map((r) => r.name);
+}
+const NOW = '2024-01-01T00:00:00.000Z';
+
+/** For each version: seed rows the way that version's schema expects, then assert what it promises. */
+const perVersion: Record<number, (db: Database.Database) => void> = {
+  1: (db) => {
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings']);
+    db.prepare("INSERT INTO parts (kind, name, data, created_at, updated_at) VALUES ('coil', 'c', '{}', ?, ?)").run(NOW, NOW);
+    db.prepare(
+      `INSERT INTO engines (name, cylinders, cycle, firing_order, bore_mm, stroke_mm, con_rod_mm, compression_ratio,
+         idle_rpm, cranking_rpm, redline_rpm, system_voltage_v, earth_polarity, charging, points_dwell_deg, points_gap_mm,
+         static_timing_deg_btdc, existing, created_at, updated_at)
+       VALUES ('e', 4, 'four-stroke', '1-3-4-2', 80, 80, 130, 8.5, 800, 150, 6000, 12, 'negative', 'dynamo', 60, 0.4, 8, '{}', ?, ?)`,
+    ).run(NOW, NOW);
+    db.prepare('INSERT INTO advance_points (engine_id, position, rpm, advance_deg) VALUES (1, 0, 800, 0), (1, 1, 2000, 12)').run();
+    db.prepare(
+      `INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at)
+       VALUES (1, 'p', 'draft', 1, 0, 'switched-15', 0.8, ?, ?)`,
+    ).run(NOW, NOW);
+    db.prepare("INSERT INTO readings (plan_id, quantity, value, unit, taken_on, created_at) VALUES (1, 'other', 1, 'V', '2024-01-01', ?)").run(NOW);
+
+    // A part a plan uses cannot be deleted, even by raw SQL (ON DELETE RESTRICT).
+    expect(() => db.prepare('DELETE FROM parts WHERE id = 1').run()).toThrow(/FOREIGN KEY/);
+    // STRICT tables refuse a wrong type rather than storing it.
+    expect(() => db.prepare("UPDATE engines SET cylinders = 'four' WHERE id = 1").run()).toThrow(/cannot store TEXT/);
+    // CHECK constraints refuse an unknown plan status and JSON that is not JSON.
+    expect(() => db.prepare("UPDATE plans SET status = 'finished' WHERE id = 1").run()).toThrow(/CHECK/);
+    expect(() => db.prepare("UPDATE parts SET data = '{not json' WHERE id = 1").run()).toThrow(/CHECK/);
+    // Deleting the engine takes its curve, its plans and their readings with it (ON DELETE CASCADE).
+    db.prepare('DELETE FROM engines WHERE id = 1').run();
+    for (const t of ['advance_points', 'plans', 'readings']) {
+      expect(db.prepare(`SELECT COUNT(*) AS n FROM ${t}`).get()).toEqual({ n: 0 });
+    }
+    expect(db.prepare('SELECT COUNT(*) AS n FROM parts').get()).toEqual({ n: 1 });
+  },
+};
+
+describe('the migration list', () => {
+  it('has a seed-and-assert spec in this file for every migration', () => {
+    expect(Object.keys(perVersion).map(Number)).toEqual(migrations.map((m) => m.version));
+  });
+
+  it('numbers its migrations 1, 2, 3 ... so versions only go up', () => {
+    expect(() => checkMigrationList(migrations)).not.toThrow();
+    expect(SCHEMA_VERSION).toBe(migrations.length);
+  });
+
+  it('rejects a list with a gap or a repeat', () => {
+    const m1 = migrations[0]!;
+    expect(() => checkMigrationList([m1, { ...m1, version: 3 }])).toThrow(/expected 2/);
+    expect(() => checkMigrationList([m1, m1])).toThrow(/expected 2/);
+  });
+});
+
+describe.each(migrations.map((m) => [m.version, m] as const))('migration %i', (version, m) => {
+  it(`migrates a fresh in-memory database to version ${version} (${m.name}), then holds and guards its seed rows`, () => {
+    const db = rawMemory();
+    migrate(db, migrations, version);
+    expect(readUserVersion(db)).toBe(version);
+    perVersion[version]!(db);
+    db.close();
+  });
+});
+
+describe('the runner', () => {
+  it('leaves the file at the previous version, with none of its tables, when a migration fails half-way', () => {
+    const broken: Migration = { version: 2, name: 'broken', sql: 'CREATE TABLE half_done (x INTEGER); INSERT INTO no_such_table VALUES (1);' };
+    const db = rawMemory();
+    expect(() => migrate(db, [...migrations.slice(0, 1), broken])).toThrow(/no such table/);
+    expect(readUserVersion(db)).toBe(1);
+    expect(tables(db)).not.toContain('half_done');
+    db.close();
+  });
+
+  // A table rebuild in SQLite's documented order (sqlite.org/lang_altertable.html): new table,
+  // copy, drop old, rename. Here it adds a CHECK on part names to a seeded version-1 file.
+  const rebuildParts = (copyWhere: string): Migration => ({
+    version: 2,
+    name: 'rebuild parts with a name check',
+    rebuildsTables: true,
+    destructiveBecause: 'test only: rebuilds parts; every row is copied before the old table is dropped',
+    sql: `CREATE TABLE parts_new (id INTEGER PRIMARY KEY, kind TEXT NOT NULL, name TEXT NOT NULL CHECK (length(name) > 0),
+            notes TEXT NOT NULL DEFAULT '', data TEXT NOT NULL CHECK (json_valid(data)), created_at TEXT NOT NULL, updated_at TEXT NOT NULL) STRICT;
+          INSERT INTO parts_new SELECT * FROM parts WHERE ${copyWhere};
+          DROP TABLE parts;
+          ALTER TABLE parts_new RENAME TO parts;`,
+  });
+  it('rebuilds a table with foreign keys off, keeps every reference, and turns foreign keys back on', () => {
+    const db = rawMemory();
+    migrate(db, migrations, 1);
+    const repos = createRepositories(db);
+    const coil = repos.parts.create(coilIn);
+    const engine = repos.engines.create(engineIn({ coilId: coil.id }));
+    db.prepare(
+      `INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at)
+       VALUES (?, 'p', 'draft', ?, 0, 'switched-15', 0.8, ?, ?)`,
+    ).run(engine.id, coil.id, NOW, NOW);
+    migrate(db, [...migrations.slice(0, 1), rebuildParts('1')]);
+    expect(readUserVersion(db)).toBe(2);
+    expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
+    expect(db.pragma('foreign_key_check')).toEqual([]);
+    expect(() => db.prepare('DELETE FROM parts WHERE id = ?').run(coil.id)).toThrow(/FOREIGN KEY/);
+    db.close();
+  });
+
+  it('rolls a rebuild back whole when it would orphan a plan’s part reference', () => {
+    const db = rawMemory();
+    migrate(db, migrations, 1);
+    const repos = createRepositories(db);
+    const coil = repos.parts.create(coilIn);
+    const engine = repos.engines.create(engineIn());
+    db.prepare(
+      `INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at)
+       VALUES (?, 'p', 'draft', ?, 0, 'switched-15', 0.8, ?, ?)`,
+    ).run(engine.id, coil.id, NOW, NOW);
+    expect(() => migrate(db, [...migrations.slice(0, 1), rebuildParts('0')])).toThrow(/broken reference/);
+    expect(readUserVersion(db)).toBe(1);
+    expect(repos.parts.get(coil.id)).toMatchObject({ name: coilIn.name });
+    expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
+    db.close();
+  });
+
+  it('refuses to migrate a database that is newer than the list', () => {
+    const db = rawMemory();
+    db.pragma('user_version = 7');
+    expect(() => migrate(db, migrations)).toThrow(StoreError);
+    expect(tables(db)).toEqual([]);
+    db.close();
+  });
+});
+
+describe('opening a real file', () => {
+  it('replays the whole chain on a new file and sets user_version to the newest schema', () => {
+    const file = join(temp('chain'), 'workshop.sqlite3');
+    const db = openStore(file);
+    expect(readUserVersion(db)).toBe(SCHEMA_VERSION);
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings']);
+    closeStore(db);
+    expect(existsSync(file)).toBe(true);
+  });
+
+  it('keeps every record when an existing file is reopened', () => {
+    const file = join(temp('reopen'), 'workshop.sqlite3');
+    const first = openStore(file);
+    const repos = createRepositories(first);
+    const coil = repos.parts.create(coilIn);
+    const engine = repos.engines.create(engineIn({ coilId: coil.id }));
+    closeStore(first);
+
+    const again = openStore(file);
+    const reread = createRepositories(again);
+    expect(reread.parts.get(coil.id)).toEqual(coil);
+    expect(reread.engines.get(engine.id)).toEqual(engine);
+    expect(readUserVersion(again)).toBe(SCHEMA_VERSION);
+    closeStore(again);
+  });
+
+  it('refuses a file written by a newer app, names both versions, and leaves the file byte-for-byte unchanged', () => {
+    const file = join(temp('newer'), 'workshop.sqlite3');
+    const db = openStore(file);
+    createRepositories(db).parts.create(coilIn);
+    closeStore(db);
+    const raw = new Database(file);
+    raw.pragma(`user_version = ${SCHEMA_VERSION + 2}`);
+    raw.close();
+    const before = sha(file);
+
+    let caught: unknown;
+    try {
+      openStore(file);
+    } catch (err) {
+      caught = err;
+    }
+    expect(caught).toBeInstanceOf(StoreError);
+    expect((caught as StoreError).code).toBe('STORE_TOO_NEW');
+    expect((caught as StoreError).message).toBe(
+      `This workshop file was written by a newer version of the app (schema ${SCHEMA_VERSION + 2}; this app knows up to ${SCHEMA_VERSION}). Update the app; the file was not changed.`,
+    );
+    expect(sha(file)).toBe(before);
+  });
+
+  it('refuses a newer file kept in rollback-journal mode without switching it to WAL (that would rewrite its header)', () => {
+    const file = join(temp('newer-delete'), 'workshop.sqlite3');
+    const raw = new Database(file);
+    raw.exec('CREATE TABLE from_the_future (x TEXT); INSERT INTO from_the_future VALUES (1);');
+    raw.pragma(`user_version = ${SCHEMA_VERSION + 1}`);
+    raw.close();
+    const before = sha(file);
+    expect(() => openStore(file)).toThrow(expect.objectContaining({ code: 'STORE_TOO_NEW' }));
+    expect(sha(file)).toBe(before);
+    expect(existsSync(`${file}-wal`)).toBe(false);
+  });
+
+  it('refuses a file that is not a database with a CORRUPT error and does not touch it', () => {
+    const file = join(temp('notdb'), 'workshop.sqlite3');
+    writeFileSync(file, 'this is a shopping list, not a database\n'.repeat(200));
+    const before = sha(file);
+    expect(() => openStore(file)).toThrow(expect.objectContaining({ code: 'CORRUPT' }));
+    expect(sha(file)).toBe(before);
+  });
+
+  it('sets WAL, foreign keys, a busy timeout and synchronous FULL on a file', () => {
+    const db = openStore(join(temp('pragmas'), 'workshop.sqlite3'));
+    expect(db.pragma('journal_mode', { simple: true })).toBe('wal');
+    expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
+    expect(db.pragma('busy_timeout', { simple: true })).toBe(BUSY_TIMEOUT_MS);
+    expect(db.pragma('synchronous', { simple: true })).toBe(2);
+    closeStore(db);
+    expect(db.open).toBe(false);
+    expect(() => closeStore(db)).not.toThrow();
+  });
+
+  it('sets the same pragmas on :memory: except WAL, which an in-memory database cannot use', () => {
+    const db = openStore(':memory:');
+    expect(db.pragma('journal_mode', { simple: true })).toBe('memory');
+    expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
+    expect(db.pragma('busy_timeout', { simple: true })).toBe(BUSY_TIMEOUT_MS);
+    expect(db.pragma('synchronous', { simple: true })).toBe(2);
+    closeStore(db);
+  });
+});
+
+/**
+ * A migration that drops or renames, or adds a NOT NULL column without a default (which fails on
+ * any table that already has rows), can lose a restorer's records. Such a migration must say why
+ * it is safe in `destructiveBecause`.
+ */
+function destructiveStatements(sql: string): string[] {
+  const code = sql.replace(/--[^\n]*/g, '').replace(/\/\*[\s\S]*?\*\//g, '');
+  const found: string[] = [];
+  for (const stmt of code.split(';').map((s) => s.trim()).filter(Boolean)) {
+    const flat = stmt.replace(/\s+/g, ' ');
+    if (/\bDROP\b/i.test(flat)) found.push(flat);
+    else if (/\bRENAME\b/i.test(flat)) found.push(flat);
+    else if (/^ALTER TABLE\b.*\bADD\b/i.test(flat) && /\bNOT NULL\b/i.test(flat) && !/\bDEFAULT\b/i.test(flat)) found.push(flat);
+  }
+  return found;
+}
+
+describe('additive migrations', () => {
+  it('the scanner spots drops, renames and NOT NULL additions without a default, and lets a defaulted one pass', () => {
+    expect(destructiveStatements('DROP TABLE parts;')).toHaveLength(1);
+    expect(destructiveStatements('ALTER TABLE parts RENAME TO bits;')).toHaveLength(1);
+    expect(destructiveStatements('ALTER TABLE parts RENAME COLUMN name TO label;')).toHaveLength(1);
+    expect(destructiveStatements('ALTER TABLE parts ADD COLUMN maker TEXT NOT NULL;')).toHaveLength(1);
+    expect(destructiveStatements("ALTER TABLE parts ADD COLUMN maker TEXT NOT NULL DEFAULT '';")).toHaveLength(0);
+    expect(destructiveStatements('-- DROP TABLE parts;\nCREATE TABLE x (a TEXT NOT NULL);')).toHaveLength(0);
+  });
+
+  it.each(migrations.map((m) => [m.version, m] as const))('migration %i is additive or says why it is not', (_v, m) => {
+    const found = destructiveStatements(m.sql);
+    if (found.length > 0) {
+      expect(m.destructiveBecause, `destructive statements need a reason: ${found.join(' | ')}`).toMatch(/\S{10,}/);
+    } else {
+      expect(found).toEqual([]);
+    }
+  });
+});
