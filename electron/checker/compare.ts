@@ -1,0 +1,26 @@
+/**
+ * The comparison: the existing setup beside up to three candidates, on the same engine, the same
+ * conditions and the same rpm grid, each candidate judged against the existing one.
+ */
+import { toReport } from './report.js';
+import { analyse, baselineOf, createSession } from './session.js';
+import { CheckerInputError, type ComparisonInput, type ComparisonReport, type ComparisonRow, type SetupReport } from './types.js';
+
+export const MAX_CANDIDATES = 3;
+
+function row(r: SetupReport): ComparisonRow {
+  return { label: r.label, verdict: r.verdict, ...r.keyPoints, belowMarginFromRpm: r.belowMarginFromRpm };
+}
+
+export function compareSetups(input: ComparisonInput): ComparisonReport {
+  if (input.candidates.length > MAX_CANDIDATES) {
+    throw new CheckerInputError(`Compare at most ${MAX_CANDIDATES} candidates with the existing setup at once.`);
+  }
+  const s = createSession(input.engine, input.conditions, input.options);
+  const withGap = !(input.options?.skipGapSuggestion ?? false);
+  const ex = analyse(s, input.existing, null, withGap);
+  const existing = toReport(s, ex);
+  const base = baselineOf(ex, 'the existing setup');
+  const candidates = input.candidates.map((c) => toReport(s, analyse(s, c, base, withGap)));
+  return { conditions: s.conditions, existing, candidates, rows: [existing, ...candidates].map(row) };
+}

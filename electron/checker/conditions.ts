@@ -1,0 +1,119 @@
+/**
+ * Operating conditions: the defaults the checker assumes, each labelled with where it came from,
+ * and the merge with whatever the caller overrides (an engine's own values, a measured reading).
+ */
+import type { ConditionInputs, ConditionName, EngineSpec, Provenance, ResolvedConditions, Sourced } from './types.js';
+
+const WORKSHOP: Provenance = 'default (workshop documentation)';
+const MEMORY: Provenance = 'default (from memory)';
+const PRACTICE: Provenance = 'default (common practice)';
+const STANDARD: Provenance = 'default (standard value)';
+
+const d = (value: number, provenance: Provenance): Sourced => ({ value, provenance });
+
+/** Unit of each condition, for reports. */
+export const conditionUnits: Record<ConditionName, string> = {
+  runningSupplyV: 'V',
+  crankingSupplyV: 'V',
+  harnessResistanceOhm: 'ohm',
+  ambientC: 'degC',
+  underBonnetC: 'degC',
+  volumetricEfficiency: '',
+  ambientPressurePa: 'Pa',
+  inletChargeC: 'degC',
+  pointsContactResistanceOhm: 'ohm',
+  secondaryCapacitanceF: 'F',
+  transferEfficiency: '',
+  arcVoltageV: 'V',
+  fouledShuntOhm: 'ohm',
+  ballastThermalResistanceKPerW: 'K/W',
+  coilDissipationLimitW: 'W',
+  currentLimitHoldS: 's',
+  cdRiseRateVPerS: 'V/s',
+  marginRatio: '',
+};
+
+/**
+ * Battery load-test pass floor against temperature, as printed in workshop manuals: a healthy 12 V
+ * battery holds at least 9.6 / 9.4 / 9.1 / 8.7 / 8.5 V under load at 21 / 10 / -1 / -12 / -18 degC.
+ * We use it as the cranking supply a healthy battery gives at the ambient temperature.
+ */
+export const CRANKING_FLOOR_TABLE: ReadonlyArray<readonly [number, number]> = [
+  [-18, 8.5],
+  [-12, 8.7],
+  [-1, 9.1],
+  [10, 9.4],
+  [21, 9.6],
+];
+
+/** Cranking floor at an ambient temperature, interpolated; held flat beyond the table. */
+export function crankingFloorV(ambientC: number): number {
+  const t = CRANKING_FLOOR_TABLE;
+  if (!(ambientC > t[0]![0])) return t[0]![1];
+  for (let i = 1; i < t.length; i++) {
+    const [c1, v1] = t[i]!;
+    if (ambientC <= c1) {
+      const [c0, v0] = t[i - 1]!;
+      return v0 + ((v1 - v0) * (ambientC - c0)) / (c1 - c0);
+    }
+  }
+  return t[t.length - 1]![1];
+}
+
+/**
+ * The defaults. Running 14.0 V is the middle of a 13.5 to 14.5 V regulated range and cranking
+ * 9.6 V is the load-test pass floor at 21 degC, both as printed in workshop manuals; the 6 V
+ * figures (7.2 V charging, 4.8 V cranking) are from memory. Everything else is from memory or
+ * common practice and says so.
+ */
+export function defaultConditions(engine: EngineSpec, ambientC = 20): ResolvedConditions {
+  const six = engine.systemVoltageV === 6;
+  const crank12 = crankingFloorV(ambientC);
+  return {
+    runningSupplyV: six ? d(7.2, MEMORY) : d(14.0, WORKSHOP),
+    // 6 V: half the 12 V floor (from memory: 4.8 V at 21 degC).
+    crankingSupplyV: six ? d(crank12 / 2, MEMORY) : d(crank12, WORKSHOP),
+    harnessResistanceOhm: d(0.1, MEMORY),
+    ambientC: d(ambientC, PRACTICE),
+    underBonnetC: d(80, PRACTICE),
+    // Full load is the worst case for the required voltage.
+    volumetricEfficiency: d(0.85, MEMORY),
+    ambientPressurePa: d(101_325, STANDARD),
+    // The charge picks up heat from the manifold and valves before inlet closing (about 330 K).
+    inletChargeC: d(57, MEMORY),
+    pointsContactResistanceOhm: d(0.1, MEMORY),
+    // Coil tower, lead and plug together: 50 to 100 pF.
+    secondaryCapacitanceF: d(70e-12, MEMORY),
+    // Fraction of the lossless secondary peak a real coil delivers (leakage, core and winding loss).
+    transferEfficiency: d(0.8, MEMORY),
+    // Glow-phase arc voltage of an inductive spark: 0.5 to 1 kV.
+    arcVoltageV: d(700, MEMORY),
+    // A carbon-fouled insulator nose: hundreds of kilohm.
+    fouledShuntOhm: d(500_000, MEMORY),
+    // A finned open-coil iron ballast in free air.
+    ballastThermalResistanceKPerW: d(8, MEMORY),
+    // What a sealed oil-filled coil sheds continuously without damage.
+    coilDissipationLimitW: d(80, MEMORY),
+    // A current-limited module holds the limit a little before it breaks, so the current is surely there.
+    currentLimitHoldS: d(0.5e-3, MEMORY),
+    // CD secondary rise: 3 to 10 kV/us.
+    cdRiseRateVPerS: d(5e9, MEMORY),
+    marginRatio: d(1.25, PRACTICE),
+  };
+}
+
+/** Defaults overlaid with the caller's values; a non-finite override is ignored (the default stands). */
+export function resolveConditions(engine: EngineSpec, inputs?: ConditionInputs): ResolvedConditions {
+  // The cranking default follows the ambient temperature (a cold morning pulls a battery lower).
+  const amb = inputs?.ambientC;
+  const out = defaultConditions(engine, amb && Number.isFinite(amb.value) ? amb.value : 20);
+  if (!inputs) return out;
+  for (const key of Object.keys(out) as ConditionName[]) {
+    const given = inputs[key];
+    if (given && Number.isFinite(given.value)) out[key] = { value: given.value, provenance: given.provenance };
+  }
+  return out;
+}
+
+/** Convert Celsius to kelvin. */
+export const kelvin = (c: number): number => c + 273.15;

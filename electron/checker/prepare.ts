@@ -1,0 +1,294 @@
+/**
+ * Resolve one setup on one engine into the plain circuit numbers the sweep needs: resistances hot
+ * and cold (with the iron ballast at its self-heated equilibrium), time constants, final currents,
+ * secondary constants, the CD stage. Done once per setup so the rpm loop is arithmetic only.
+ */
+import { kelvin } from './conditions.js';
+import { meanSquareCurrentA2 } from './charge.js';
+import { REVERSED_POLARITY_FACTOR } from './breakdown.js';
+import { cdSecondaryPeakV, cdSparkDurationS } from './cd.js';
+import { dwellFractionFromAngle } from './dwell.js';
+import { parallelRlcPeakVPerA } from './fouled.js';
+import { copperResistanceOhm, finalCurrentA } from './primary.js';
+import { effectiveSecondaryCapacitanceF, secondaryRiseTimeS, turnsRatio, voltsPerAmp } from './secondary.js';
+import { ironBallastResistanceOhm, selfHeatedTemperatureK } from './thermal.js';
+import { dwellTimeS, DwellMode, type DwellParams } from './timing.js';
+import type { BreakdownModel, EngineSpec, ResolvedConditions, SetupSpec, SwitchingKind } from './types.js';
+import { sparkRateHz } from './dwell.js';
+
+export interface PreparedCd {
+  capacitorF: number;
+  nominalV: number;
+  chargerPowerW: number;
+  supplyMinV: number;
+  cutOutV: number;
+  multiSparkBelowRpm: number | null;
+  /** Secondary peak per volt of charge. */
+  peakPerChargeV: number;
+  riseRateVPerS: number;
+  sparkDurationS: number;
+}
+
+export interface PreparedSetup extends DwellParams {
+  spec: SetupSpec;
+  kind: SwitchingKind;
+  /** Why the setup is incomplete or inconsistent; empty when it is sound. */
+  issues: string[];
+  model: BreakdownModel;
+  switchDropV: number;
+  runningSupplyV: number;
+  crankingSupplyV: number;
+  coilColdOhm: number;
+  coilHotOhm: number;
+  ballastColdOhm: number;
+  ballastHotOhm: number;
+  ballastHotK: number;
+  harnessOhm: number;
+  contactOhm: number;
+  rRunningOhm: number;
+  rCrankingOhm: number;
+  rColdOhm: number;
+  iFinalRunningA: number;
+  iFinalCrankingA: number;
+  tauRunningS: number;
+  tauCrankingS: number;
+  primaryInductanceH: number;
+  condenserF: number;
+  secondaryCapacitanceF: number;
+  effectiveCapacitanceF: number;
+  n: number;
+  secondaryInductanceH: number;
+  secondaryResistanceOhm: number;
+  eta: number;
+  clampV: number | null;
+  /** n x clamp, or Infinity without a clamp. */
+  capV: number;
+  arcV: number;
+  fouledShuntOhm: number;
+  voltsPerAmp: number;
+  /** Fouled-plug first peak per primary ampere at break. */
+  fouledVPerA: number;
+  riseS: number;
+  /** Multiplies the breakdown voltage: 1, or 1/0.9 with the coil wired the wrong way round. */
+  polarityFactor: number;
+  moduleSupplyRunningV: number | null;
+  moduleSupplyCrankingV: number | null;
+  cd: PreparedCd | null;
+  magnetoRatedA: number;
+  magnetoFullRpm: number;
+}
+
+const MODULE_KINDS: ReadonlySet<SwitchingKind> = new Set(['transistor-points', 'breakerless-fixed-duty', 'breakerless-current-limited', 'capacitive-discharge']);
+
+/** A positive finite number, or the fallback with an issue noted. */
+function pos(value: number | null | undefined, fallback: number, what: string, issues: string[]): number {
+  if (typeof value === 'number' && Number.isFinite(value) && value > 0) return value;
+  issues.push(`${what} is missing or not a positive number; ${fallback} was assumed.`);
+  return fallback;
+}
+function nonNeg(value: number | null | undefined, fallback: number): number {
+  return typeof value === 'number' && Number.isFinite(value) && value >= 0 ? value : fallback;
+}
+
+/**
+ * Supply a module sees when it is the only load on its feed (a CD charger drawing P): the feed
+ * resistance R drops it, V_m = V - R P / V_m, so V_m = (V + sqrt(V^2 - 4 R P)) / 2; when the
+ * feed cannot deliver P at all the supply collapses to about V / 2.
+ */
+function supplyUnderPowerLoadV(supplyV: number, feedOhm: number, powerW: number): number {
+  const disc = supplyV * supplyV - 4 * feedOhm * powerW;
+  return disc > 0 ? 0.5 * (supplyV + Math.sqrt(disc)) : 0.5 * supplyV;
+}
+
+export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedConditions, model: BreakdownModel): PreparedSetup {
+  const issues: string[] = [];
+  const kind = setup.switching;
+  const mod = setup.module;
+  const isModule = MODULE_KINDS.has(kind);
+  if (isModule && !mod) issues.push(`A ${kind} setup needs a module; none is chosen.`);
+  if (isModule && mod && mod.moduleType !== kind) issues.push(`The module chosen is a ${mod.moduleType} module, but the setup is described as ${kind}.`);
+  if (!isModule && mod) issues.push('Points and magneto setups switch the coil themselves; the module chosen is ignored.');
+  if (kind === 'magneto' && !setup.magneto) issues.push('A magneto needs its rated break current and the rpm of full output.');
+  if (kind === 'capacitive-discharge' && mod && !mod.cd) issues.push('A capacitive-discharge module needs its capacitor, charge voltage and charger power.');
+  const m = isModule ? mod : null;
+
+  const coil = setup.coil;
+  const r20 = pos(coil.primaryResistanceOhm20C.value, 3, 'The coil primary resistance', issues);
+  const lp = pos(coil.primaryInductanceH, 0.008, 'The coil primary inductance', issues);
+  const n = turnsRatio(coil.turnsRatio, coil.secondaryInductanceH, lp);
+  const ls = coil.secondaryInductanceH !== null && coil.secondaryInductanceH > 0 ? coil.secondaryInductanceH : n * n * lp;
+  const ambientC = c.ambientC.value;
+  const hotC = c.underBonnetC.value;
+  const coilCold = copperResistanceOhm(r20, ambientC);
+  const coilHot = copperResistanceOhm(r20, hotC);
+  const harness = nonNeg(c.harnessResistanceOhm.value, 0.1);
+  const usesPoints = kind === 'points' || kind === 'magneto';
+  const contact = usesPoints ? nonNeg(c.pointsContactResistanceOhm.value, 0.1) : 0;
+  const switchDrop = m ? nonNeg(m.switchSaturationV, 0) : 0;
+  const runV = nonNeg(c.runningSupplyV.value, 14);
+  const crankV = nonNeg(c.crankingSupplyV.value, 9.6);
+
+  // Dwell parameters.
+  let mode: DwellMode = DwellMode.Cam;
+  let fixedDuty = 0.5;
+  let maxDuty = 0.9;
+  let limitA = Infinity;
+  if (kind === 'breakerless-fixed-duty') {
+    mode = DwellMode.FixedDuty;
+    fixedDuty = m?.fixedDutyFraction ?? (issues.push('A fixed-duty module needs its duty fraction; 0.5 was assumed.'), 0.5);
+  } else if (kind === 'breakerless-current-limited') {
+    mode = DwellMode.CurrentLimited;
+    if (m && (m.currentLimitA === null || m.maxDutyFraction === null)) issues.push('A current-limited module needs its current limit and maximum duty.');
+    limitA = m?.currentLimitA ?? m?.maxCurrentA ?? 6;
+    maxDuty = m?.maxDutyFraction ?? 0.8;
+  } else if (kind === 'capacitive-discharge') {
+    mode = DwellMode.Cd;
+  } else if (kind === 'magneto') {
+    mode = DwellMode.Magneto;
+  }
+  // Any module with a current limit caps the current at break, whatever sets its dwell.
+  if (m && m.currentLimitA !== null && m.currentLimitA > 0) limitA = Math.min(limitA, m.currentLimitA);
+  const camFraction = dwellFractionFromAngle(engine.pointsDwellDeg, engine.cylinders);
+  const dwellParams: DwellParams = {
+    mode,
+    camFraction,
+    floatRpm: kind === 'points' || kind === 'transistor-points' ? engine.pointsFloatRpm : null,
+    fixedDuty,
+    maxDuty,
+    holdS: nonNeg(c.currentLimitHoldS.value, 0.5e-3),
+    limitA,
+  };
+
+  // Ballast: cold value, and hot equilibrium at idle on the running supply.
+  const b = setup.ballast;
+  const bCold = b ? pos(b.coldResistanceOhm.value, 1.5, 'The ballast resistance', issues) : 0;
+  const theta = b ? (b.thermalResistanceKPerW ?? c.ballastThermalResistanceKPerW.value) : 0;
+  const bAt = (tK: number): number => (b && b.ballastType === 'iron-wire' ? ironBallastResistanceOhm(bCold, tK) : bCold);
+  const baseHot = coilHot + harness + contact;
+  const ambientK = kelvin(hotC);
+  let bHotK = kelvin(ambientC);
+  if (b && kind !== 'magneto') {
+    const idleRate = sparkRateHz(engine.idleRpm, engine.cylinders, engine.cycle);
+    const period = idleRate > 0 ? 1 / idleRate : 1;
+    const power = (tK: number): number => {
+      const rb = bAt(tK);
+      if (kind === 'capacitive-discharge') {
+        // The ballast only carries the charger's input current, about P / V.
+        const i = (m?.cd?.chargerPowerW ?? 0) / Math.max(1, runV);
+        return i * i * rb;
+      }
+      const r = baseHot + rb;
+      const iF = finalCurrentA(runV, switchDrop, r);
+      const tau = lp / r;
+      const td = dwellTimeS(dwellParams, period, engine.idleRpm, iF, tau);
+      return meanSquareCurrentA2(iF, tau, td, period, limitA) * rb;
+    };
+    bHotK = selfHeatedTemperatureK(ambientK, Math.max(0, theta), power);
+  }
+  const bHot = b ? bAt(bHotK) : 0;
+  const withBallastCranking = b !== null && !setup.crankingBypass;
+  const rRunning = baseHot + bHot;
+  const rCranking = coilCold + harness + contact + (withBallastCranking ? bCold : 0);
+  const rCold = coilCold + harness + contact + bCold;
+  const iRun = finalCurrentA(runV, switchDrop, rRunning);
+  const iCrank = finalCurrentA(crankV, switchDrop, rCranking);
+
+  // Secondary.
+  const condenser = setup.condenserF !== null && setup.condenserF > 0 ? setup.condenserF : 0;
+  const cs = pos(c.secondaryCapacitanceF.value, 70e-12, 'The secondary capacitance', issues);
+  const cEff = effectiveSecondaryCapacitanceF(cs, condenser, n);
+  const eta = Math.min(1, pos(c.transferEfficiency.value, 0.8, 'The transfer efficiency', issues));
+  const clampV = m && m.primaryClampV !== null && m.primaryClampV > 0 ? m.primaryClampV : null;
+  const capV = clampV !== null ? n * clampV : Infinity;
+  const leadOhm = setup.leads ? nonNeg(setup.leads.resistancePerLeadOhm, 0) : 0;
+  const plugOhm = setup.plug && setup.plug.resistor ? nonNeg(setup.plug.resistorOhm, 0) : 0;
+  const rs = nonNeg(coil.secondaryResistanceOhm, 8000) + leadOhm + plugOhm;
+  const fouledOhm = pos(c.fouledShuntOhm.value, 500_000, 'The fouled-plug shunt', issues);
+
+  // Module supply: fed from terminal 15 it loses only the harness drop; fed after the ballast it
+  // also loses the ballast drop whenever the coil draws current (the worst moment, just before break).
+  let modRun: number | null = null;
+  let modCrank: number | null = null;
+  let cd: PreparedCd | null = null;
+  if (m) {
+    const afterBallast = setup.moduleFeed === 'after-ballast' && b !== null;
+    const feedRun = harness + (afterBallast ? bHot : 0);
+    // With a cranking bypass the coil side of the ballast is fed from the starter circuit.
+    const feedCrank = harness + (afterBallast && !setup.crankingBypass ? bCold : 0);
+    if (kind === 'capacitive-discharge' && m.cd) {
+      modRun = supplyUnderPowerLoadV(runV, feedRun, m.cd.chargerPowerW);
+      modCrank = supplyUnderPowerLoadV(crankV, feedCrank, m.cd.chargerPowerW);
+    } else {
+      modRun = Math.max(0, runV - feedRun * iRun);
+      modCrank = Math.max(0, crankV - feedCrank * iCrank);
+    }
+    if (kind === 'capacitive-discharge') {
+      const stage = m.cd;
+      const capF = stage ? pos(stage.capacitorF, 1e-6, 'The CD capacitor', issues) : 0;
+      cd = {
+        capacitorF: capF,
+        nominalV: stage ? nonNeg(stage.chargeVoltageV, 0) : 0,
+        chargerPowerW: stage ? nonNeg(stage.chargerPowerW, 0) : 0,
+        supplyMinV: nonNeg(m.supplyMinV, 0),
+        cutOutV: m.cutOutV ?? 0.75 * nonNeg(m.supplyMinV, 0),
+        multiSparkBelowRpm: stage?.multiSparkBelowRpm ?? null,
+        peakPerChargeV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta) : 0,
+        riseRateVPerS: pos(c.cdRiseRateVPerS.value, 5e9, 'The CD rise rate', issues),
+        sparkDurationS: cdSparkDurationS(lp, capF),
+      };
+    }
+  }
+
+  return {
+    mode: dwellParams.mode,
+    camFraction: dwellParams.camFraction,
+    floatRpm: dwellParams.floatRpm,
+    fixedDuty: dwellParams.fixedDuty,
+    maxDuty: dwellParams.maxDuty,
+    holdS: dwellParams.holdS,
+    limitA: dwellParams.limitA,
+    spec: setup,
+    kind,
+    issues,
+    model,
+    switchDropV: switchDrop,
+    runningSupplyV: kind === 'magneto' ? 0 : runV,
+    crankingSupplyV: kind === 'magneto' ? 0 : crankV,
+    coilColdOhm: coilCold,
+    coilHotOhm: coilHot,
+    ballastColdOhm: bCold,
+    ballastHotOhm: bHot,
+    ballastHotK: bHotK,
+    harnessOhm: harness,
+    contactOhm: contact,
+    rRunningOhm: rRunning,
+    rCrankingOhm: rCranking,
+    rColdOhm: rCold,
+    iFinalRunningA: kind === 'magneto' ? 0 : iRun,
+    iFinalCrankingA: kind === 'magneto' ? 0 : iCrank,
+    tauRunningS: lp / Math.max(1e-6, rRunning),
+    tauCrankingS: lp / Math.max(1e-6, rCranking),
+    primaryInductanceH: lp,
+    condenserF: condenser,
+    secondaryCapacitanceF: cs,
+    effectiveCapacitanceF: cEff,
+    n,
+    secondaryInductanceH: ls,
+    secondaryResistanceOhm: rs,
+    eta,
+    clampV,
+    capV,
+    arcV: pos(c.arcVoltageV.value, 700, 'The arc voltage', issues),
+    fouledShuntOhm: fouledOhm,
+    voltsPerAmp: voltsPerAmp(lp, cEff),
+    // The inductor starts with i_break / n; the efficiency scales the delivered peak.
+    fouledVPerA: (eta / n) * parallelRlcPeakVPerA(ls, cEff, fouledOhm),
+    riseS: secondaryRiseTimeS(ls, cEff),
+    polarityFactor: setup.coilWiring === 'reversed' ? REVERSED_POLARITY_FACTOR : 1,
+    moduleSupplyRunningV: modRun,
+    moduleSupplyCrankingV: modCrank,
+    cd,
+    magnetoRatedA: setup.magneto ? nonNeg(setup.magneto.ratedCurrentA, 0) : 0,
+    magnetoFullRpm: setup.magneto ? nonNeg(setup.magneto.fullOutputRpm, 1) : 1,
+  };
+}

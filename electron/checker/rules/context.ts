@@ -1,0 +1,67 @@
+/**
+ * What every rule sees: the inputs, the prepared circuit and the sweep results. Rules only read.
+ */
+import type { RpmGrid } from '../grid.js';
+import type { PreparedSetup } from '../prepare.js';
+import type { Workspace } from '../sweep.js';
+import type { EngineSpec, Figure, KeyOnReport, PlugGapSuggestion, ResolvedConditions, RuleId, RuleResult, SetupSpec, Verdict } from '../types.js';
+
+export interface Baseline {
+  label: string;
+  energyJ: Float64Array;
+  worstRatio: number;
+}
+
+export interface RuleContext {
+  engine: EngineSpec;
+  c: ResolvedConditions;
+  setup: SetupSpec;
+  p: PreparedSetup;
+  grid: RpmGrid;
+  ws: Workspace;
+  /** Last sweep index at or below redline. */
+  redlineIndex: number;
+  /** First sweep index at or above idle. */
+  idleIndex: number;
+  keyOn: KeyOnReport;
+  margin: number;
+  baseline: Baseline | null;
+  gap: PlugGapSuggestion | null;
+  /** Lowest reserve ratio over cranking..redline and its index. */
+  worstRatio: number;
+  worstIndex: number;
+}
+
+export type Rule = (ctx: RuleContext) => RuleResult;
+
+export function result(id: RuleId, title: string, verdict: Verdict, figures: Figure[], why: string, action: string): RuleResult {
+  return { id, title, verdict, figures, why, action };
+}
+
+/** A figure, forced finite so that no report ever carries NaN or Infinity. */
+export function fig(name: string, value: number, unit: string): Figure {
+  return { name, value: Number.isFinite(value) ? value : 0, unit };
+}
+
+/** Plain number formatting for sentences. */
+export function fmt(x: number, digits = 1): string {
+  return Number.isFinite(x) ? x.toFixed(digits) : '-';
+}
+
+export const isModuleKind = (ctx: RuleContext): boolean => ctx.setup.module !== null && ctx.p.kind !== 'points' && ctx.p.kind !== 'magneto';
+
+/** Largest value of a column over [from, to]. */
+export function maxOver(a: Float64Array, from: number, to: number): { value: number; index: number } {
+  let v = -Infinity;
+  let idx = from;
+  for (let i = from; i <= to; i++) if (a[i]! > v) { v = a[i]!; idx = i; }
+  return { value: v, index: idx };
+}
+
+/** Smallest value of a column over [from, to]. */
+export function minOver(a: Float64Array, from: number, to: number): { value: number; index: number } {
+  let v = Infinity;
+  let idx = from;
+  for (let i = from; i <= to; i++) if (a[i]! < v) { v = a[i]!; idx = i; }
+  return { value: v, index: idx };
+}

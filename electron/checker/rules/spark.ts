@@ -1,0 +1,139 @@
+/**
+ * Rules about the spark itself across rpm: energy, voltage reserve, spark rate, off time, plug gap.
+ */
+import { fig, fmt, isModuleKind, minOver, result, type Rule } from './context.js';
+
+/**
+ * Floor below which we call a spark too weak to rely on: rich or lean mixtures need several mJ
+ * (from memory), and a healthy points system delivers some tens of mJ.
+ */
+export const ENERGY_FLOOR_J = 5e-3;
+
+export const sparkEnergy: Rule = (ctx) => {
+  const { ws, idleIndex, redlineIndex, baseline, grid } = ctx;
+  const id = 'spark-energy';
+  const title = 'Spark energy across rpm';
+  const low = minOver(ws.energyJ, idleIndex, redlineIndex);
+  const figures = [fig('lowest energy, idle to redline', low.value * 1000, 'mJ'), fig('at rpm', grid.rpm[low.index]!, 'rpm'), fig('energy at cranking', ws.energyJ[0]! * 1000, 'mJ')];
+  const why = 'Energy is what keeps a spark alight through a lean or rich mixture; it falls with rpm as the coil has less time to charge.';
+  if (low.value < ENERGY_FLOOR_J) {
+    return result(id, title, 'fail', figures, `${why} It drops to ${fmt(low.value * 1000)} mJ by ${fmt(grid.rpm[low.index]!, 0)} rpm, below the ${fmt(ENERGY_FLOOR_J * 1000)} mJ we treat as the least to rely on.`, 'Choose a coil of lower inductance or resistance, or a module that charges it longer.');
+  }
+  if (baseline) {
+    let worstRel = Infinity;
+    let worstI = idleIndex;
+    for (let i = idleIndex; i <= redlineIndex; i++) {
+      const b = baseline.energyJ[i]!;
+      if (b > 0) {
+        const rel = ws.energyJ[i]! / b;
+        if (rel < worstRel) { worstRel = rel; worstI = i; }
+      }
+    }
+    if (Number.isFinite(worstRel)) {
+      figures.push(fig(`relative to ${baseline.label}, worst`, worstRel * 100, '%'), fig('worst at rpm', grid.rpm[worstI]!, 'rpm'));
+      if (worstRel < 0.9) {
+        return result(id, title, 'caution', figures, `${why} At ${fmt(grid.rpm[worstI]!, 0)} rpm it gives ${fmt(worstRel * 100, 0)} % of the energy of ${baseline.label}.`, 'Acceptable if the reserve holds; otherwise choose a coil and module that charge harder at that speed.');
+      }
+    }
+  }
+  if (ws.energyJ[0]! < ENERGY_FLOOR_J) {
+    return result(id, title, 'caution', figures, `${why} While cranking it gives only ${fmt(ws.energyJ[0]! * 1000)} mJ.`, 'Expect hard starting; check the cranking supply and the ballast bypass.');
+  }
+  return result(id, title, 'pass', figures, why, 'Nothing to do.');
+};
+
+/** Available against required voltage, with the common-practice margin of 1.25. */
+export const voltageReserve: Rule = (ctx) => {
+  const { ws, worstRatio, worstIndex, margin, grid, baseline } = ctx;
+  const id = 'voltage-reserve';
+  const title = 'Voltage reserve';
+  const rpm = grid.rpm[worstIndex]!;
+  const figures = [
+    fig('worst available / required', worstRatio, ''),
+    fig('at rpm', rpm, 'rpm'),
+    fig('available there', ws.availableV[worstIndex]! / 1000, 'kV'),
+    fig('required there', ws.requiredV[worstIndex]! / 1000, 'kV'),
+    fig('margin (common practice)', margin, ''),
+  ];
+  if (baseline) figures.push(fig(`${baseline.label}, worst ratio`, baseline.worstRatio, ''));
+  const why = 'The coil must offer more voltage than the gap needs at full load, with room for worn plugs, a damp lead and a wide gap: when it cannot, the engine misfires under load.';
+  const where = worstIndex === 0 ? 'while cranking' : `at ${fmt(rpm, 0)} rpm`;
+  if (worstRatio < 1) {
+    return result(id, title, 'fail', figures, `${why} ${where} it offers ${fmt(ws.availableV[worstIndex]! / 1000)} kV where ${fmt(ws.requiredV[worstIndex]! / 1000)} kV is needed.`, 'Close the plug gap, or choose a coil and module with more output.');
+  }
+  if (worstRatio < margin) {
+    return result(id, title, 'caution', figures, `${why} ${where} the reserve ratio is ${fmt(worstRatio, 2)}, under the ${fmt(margin, 2)} margin.`, 'Close the plug gap a little (see the suggested gap) or choose a stronger coil.');
+  }
+  return result(id, title, 'pass', figures, why, 'Nothing to do.');
+};
+
+/** The module's highest spark rate against the rate at redline. */
+export const sparkRate: Rule = (ctx) => {
+  const { engine, setup, grid, redlineIndex } = ctx;
+  const id = 'spark-rate';
+  const title = 'Spark rate at redline';
+  const redlineRate = (engine.redlineRpm * engine.cylinders) / (engine.cycle === 'two-stroke' ? 60 : 120);
+  const figures = [fig('spark rate at redline', redlineRate, 'Hz')];
+  const m = setup.module;
+  if (!isModuleKind(ctx) || !m) {
+    const float = engine.pointsFloatRpm;
+    if (ctx.p.kind === 'points' && float !== null && float < engine.redlineRpm) {
+      figures.push(fig('points float from', float, 'rpm'));
+      return result(id, title, 'caution', figures, 'The points follower leaves the cam before redline, so the dwell and the spark collapse at the top.', 'Stronger points springs, or an electronic trigger, cure points float.');
+    }
+    return result(id, title, 'pass', figures, 'Points have no electronic spark-rate limit.', 'Nothing to do.');
+  }
+  figures.push(fig('module limit', m.maxSparkRateHz, 'Hz'));
+  void grid; void redlineIndex;
+  const why = 'Above its highest spark rate a module skips sparks, which feels like hitting a rev limiter.';
+  if (redlineRate > m.maxSparkRateHz) return result(id, title, 'fail', figures, `${why} Redline needs ${fmt(redlineRate, 0)} sparks a second against a limit of ${fmt(m.maxSparkRateHz, 0)}.`, 'Choose a module rated for this engine\'s redline.');
+  if (redlineRate > 0.9 * m.maxSparkRateHz) return result(id, title, 'caution', figures, `${why} Redline comes within 10 % of the limit.`, 'Keep clear of redline, or choose a faster module.');
+  return result(id, title, 'pass', figures, why, 'Nothing to do.');
+};
+
+/** Off time (switch open) against the spark duration: a coil switched on mid-spark cuts it short. */
+export const offTime: Rule = (ctx) => {
+  const { ws, redlineIndex, grid, p } = ctx;
+  const id = 'off-time';
+  const title = 'Time for the spark';
+  let worst = Infinity;
+  let wi = 0;
+  for (let i = 0; i <= redlineIndex; i++) {
+    const d = ws.durationS[i]!;
+    if (d > 0) {
+      const r = ws.offS[i]! / d;
+      if (r < worst) { worst = r; wi = i; }
+    }
+  }
+  if (!Number.isFinite(worst)) return result(id, title, 'pass', [], 'No spark duration to compare.', 'Nothing to do.');
+  const figures = [fig('least off time / spark duration', worst, ''), fig('at rpm', grid.rpm[wi]!, 'rpm'), fig('off time there', ws.offS[wi]! * 1000, 'ms'), fig('spark duration there', ws.durationS[wi]! * 1000, 'ms')];
+  const why = 'The coil can only be switched on again once the spark has burnt out; closing earlier cuts the spark short and wastes its energy.';
+  if (p.kind === 'capacitive-discharge') return result(id, title, 'pass', figures, 'A CD spark is short and the coil is not charged between sparks.', 'Nothing to do.');
+  if (worst < 0.3) return result(id, title, 'fail', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before a third of the spark has burnt.`, 'Choose a module with a lower maximum duty, or a coil with a shorter spark.');
+  if (worst < 1) return result(id, title, 'caution', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before the spark ends.`, 'Usually harmless near redline; a lower maximum duty would cure it.');
+  return result(id, title, 'pass', figures, why, 'Nothing to do.');
+};
+
+/** The current gap against the suggested one and the plug's recommended range. */
+export const plugGap: Rule = (ctx) => {
+  const { setup, gap } = ctx;
+  const id = 'plug-gap';
+  const title = 'Plug gap';
+  const gapMm = setup.plugGapM * 1000;
+  const figures = [fig('gap set', gapMm, 'mm')];
+  const plug = setup.plug;
+  if (plug) figures.push(fig('plug range from', plug.gapMinM * 1000, 'mm'), fig('plug range to', plug.gapMaxM * 1000, 'mm'));
+  const why = 'A wider gap gives a bigger, surer flame kernel but needs more voltage; the widest gap the coil still fires with margin is the best compromise.';
+  if (plug && (setup.plugGapM < plug.gapMinM * 0.999 || setup.plugGapM > plug.gapMaxM * 1.001)) {
+    return result(id, title, 'caution', figures, `${why} The gap set is outside the plug's recommended range.`, 'Set the gap within the plug\'s range.');
+  }
+  if (!gap) return result(id, title, 'pass', figures, why, 'No gap suggestion was computed.');
+  if (gap.suggestedGapM === null) {
+    return result(id, title, 'caution', figures, `${why} No gap from ${fmt(gap.searchedFromM * 1000, 2)} to ${fmt(gap.searchedToM * 1000, 2)} mm meets the ${fmt(gap.marginRatio, 2)} margin.`, 'Use the smallest recommended gap and look at the voltage reserve rule.');
+  }
+  figures.push(fig('suggested gap', gap.suggestedGapM * 1000, 'mm'));
+  if (setup.plugGapM > gap.suggestedGapM * 1.001) {
+    return result(id, title, 'caution', figures, `${why} The gap set is wider than the ${fmt(gap.suggestedGapM * 1000, 2)} mm that keeps the margin.`, `Close the gap to ${fmt(gap.suggestedGapM * 1000, 2)} mm.`);
+  }
+  return result(id, title, 'pass', figures, why, `The gap set keeps the margin; up to ${fmt(gap.suggestedGapM * 1000, 2)} mm would too.`);
+};

@@ -1,0 +1,119 @@
+/**
+ * A check session: one engine under one set of conditions, with its rpm grids built once. Each
+ * setup is then prepared, swept and judged against it.
+ */
+import { buildGrids, type EngineGrids } from './grid.js';
+import { keyOnReport } from './keyon.js';
+import { prepareSetup, type PreparedSetup } from './prepare.js';
+import { resolveConditions } from './conditions.js';
+import { createWorkspace, evaluateGrid, requiredInto, type Workspace } from './sweep.js';
+import { suggestGap } from './gap.js';
+import { runRules, worstVerdict } from './rules/index.js';
+import type { Baseline } from './rules/context.js';
+import type { BreakdownModel, CheckOptions, ConditionInputs, EngineSpec, KeyOnReport, PlugGapSuggestion, ResolvedConditions, RuleResult, SetupSpec, Verdict } from './types.js';
+
+export interface Session {
+  engine: EngineSpec;
+  conditions: ResolvedConditions;
+  grids: EngineGrids;
+  model: BreakdownModel;
+  margin: number;
+  options: CheckOptions;
+  /** Required voltage on the sweep grid, by gap and polarity factor, computed once each. */
+  requiredCache: Map<string, Float64Array>;
+}
+
+/** Required voltage across the sweep for a gap and polarity factor, shared between setups. */
+export function requiredFor(s: Session, gapM: number, polarityFactor: number): Float64Array {
+  const key = `${gapM}|${polarityFactor}`;
+  let a = s.requiredCache.get(key);
+  if (!a) {
+    a = new Float64Array(s.grids.sweep.n);
+    requiredInto(a, s.grids.sweep, gapM, s.model === 'paschen', polarityFactor);
+    if (s.requiredCache.size > 64) s.requiredCache.clear();
+    s.requiredCache.set(key, a);
+  }
+  return a;
+}
+
+export function createSession(engine: EngineSpec, conditions?: ConditionInputs, options?: CheckOptions): Session {
+  const c = resolveConditions(engine, conditions);
+  const opts = options ?? {};
+  const margin = c.marginRatio.value > 0 ? c.marginRatio.value : 1.25;
+  return {
+    engine,
+    conditions: c,
+    grids: buildGrids(engine, c, opts.rpmPoints ?? 200),
+    model: opts.breakdownModel ?? 'empirical-air',
+    margin,
+    options: opts,
+    requiredCache: new Map(),
+  };
+}
+
+export interface Analysis {
+  setup: SetupSpec;
+  prep: PreparedSetup;
+  ws: Workspace;
+  keyWs: Workspace;
+  keyOn: KeyOnReport;
+  rules: RuleResult[];
+  verdict: Verdict;
+  worstRatio: number;
+  worstIndex: number;
+  belowMarginIndex: number;
+  gap: PlugGapSuggestion | null;
+}
+
+/** A usable gap: positive and finite, else 0.7 mm (and the setup-complete rule says so). */
+function gapOf(setup: SetupSpec, prep: PreparedSetup): number {
+  if (Number.isFinite(setup.plugGapM) && setup.plugGapM > 0) return setup.plugGapM;
+  prep.issues.push('The plug gap is missing or not positive; 0.7 mm was assumed.');
+  return 0.7e-3;
+}
+
+/** Sweep a setup and judge it. `ws`/`keyWs` may be reused between calls (the search does). */
+export function analyse(s: Session, setup: SetupSpec, baseline: Baseline | null, withGap: boolean, ws?: Workspace, keyWs?: Workspace): Analysis {
+  const prep = prepareSetup(s.engine, setup, s.conditions, s.model);
+  const gapM = gapOf(setup, prep);
+  const sweep = s.grids.sweep;
+  const w = ws ?? createWorkspace(sweep.n);
+  const k = keyWs ?? createWorkspace(s.grids.key.n);
+  evaluateGrid(prep, sweep, gapM, w, requiredFor(s, gapM, prep.polarityFactor));
+  evaluateGrid(prep, s.grids.key, gapM, k);
+  const last = s.grids.redlineIndex;
+  let worstRatio = Infinity;
+  let worstIndex = 0;
+  for (let i = 0; i <= last; i++) {
+    const r = w.reserveRatio[i]!;
+    if (r < worstRatio) { worstRatio = r; worstIndex = i; }
+  }
+  let belowMarginIndex = -1;
+  for (let i = 1; i < sweep.n; i++) {
+    if (sweep.rpm[i]! >= s.engine.idleRpm && w.reserveRatio[i]! < s.margin) { belowMarginIndex = i; break; }
+  }
+  const keyOn = keyOnReport(prep, s.conditions);
+  const gap = withGap ? suggestGap(sweep, w.availableV, last, setup.plug, s.margin, s.model === 'paschen', prep.polarityFactor) : null;
+  const rules = runRules({
+    engine: s.engine,
+    c: s.conditions,
+    setup: gapM === setup.plugGapM ? setup : { ...setup, plugGapM: gapM },
+    p: prep,
+    grid: sweep,
+    ws: w,
+    redlineIndex: last,
+    idleIndex: s.grids.idleIndex,
+    keyOn,
+    margin: s.margin,
+    baseline,
+    gap,
+    worstRatio,
+    worstIndex,
+  });
+  return { setup, prep, ws: w, keyWs: k, keyOn, rules, verdict: worstVerdict(rules), worstRatio, worstIndex, belowMarginIndex, gap };
+}
+
+/** What a candidate is compared with: the existing setup's energy across the same rpm grid. */
+export function baselineOf(a: Analysis, label?: string): Baseline {
+  return { label: label ?? a.setup.label, energyJ: Float64Array.from(a.ws.energyJ), worstRatio: a.worstRatio };
+}

@@ -1,0 +1,286 @@
+/**
+ * One spec-named test per rule verdict path. Parts are invented; limits named beside each.
+ */
+import { describe, expect, it } from 'vitest';
+import { checkSetup, compareSetups, type RuleId, type SetupReport, type Verdict } from '../../electron/checker/index.js';
+import { ballastCoil, cdModule, coil, fourCylinder, ironBallast, module, moduleSetup, pointsSetup } from './fixtures.js';
+
+const verdict = (r: SetupReport, id: RuleId): Verdict => {
+  const x = r.rules.find((y) => y.id === id);
+  if (!x) throw new Error(`no rule ${id}`);
+  expect(x.why.length).toBeGreaterThan(10);
+  expect(x.action.length).toBeGreaterThan(5);
+  for (const f of x.figures) expect(Number.isFinite(f.value)).toBe(true);
+  return x.verdict;
+};
+const fixedDuty = (over = {}) => module({ name: 'Fixed duty', moduleType: 'breakerless-fixed-duty', currentLimitA: null, maxDutyFraction: null, fixedDutyFraction: 0.6, ...over });
+
+describe('coil-resistance-floor', () => {
+  it('fails a 1.5 ohm coil without ballast on a module with a 3 ohm floor', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ minCoilResistanceOhm: 3 }), { coil: ballastCoil() })), 'coil-resistance-floor')).toBe('fail');
+  });
+  it('cautions when only the ballast keeps a low coil above the floor', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ minCoilResistanceOhm: 2.5 }), { coil: ballastCoil(), ballast: ironBallast() })), 'coil-resistance-floor')).toBe('caution');
+  });
+  it('cautions when the cranking bypass takes the circuit below the floor', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ minCoilResistanceOhm: 2.5 }), { coil: ballastCoil(), ballast: ironBallast(), crankingBypass: true })), 'coil-resistance-floor')).toBe('caution');
+  });
+  it('passes a 3 ohm coil on a module with a 2 ohm floor', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ minCoilResistanceOhm: 2 }))), 'coil-resistance-floor')).toBe('pass');
+  });
+});
+
+describe('peak-current', () => {
+  it('fails a 1.5 ohm coil without ballast on a 6 A module', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ maxCurrentA: 6, minCoilResistanceOhm: 0 }), { coil: ballastCoil() })), 'peak-current')).toBe('fail');
+  });
+  it('cautions within 10 % of the module rating', () => {
+    // 3 ohm coil hot (3.71 ohm at 80 degC) + 0.1 ohm harness on 14 V less 1.5 V: 3.29 A against 3.5 A.
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ maxCurrentA: 3.5 }))), 'peak-current')).toBe('caution');
+  });
+  it('passes a 3 ohm coil on an 8 A module', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty())), 'peak-current')).toBe('pass');
+  });
+  it('fails points breaking over 7 A (points contacts about 5 A comfortable, from memory)', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coil: coil({ primaryResistanceOhm20C: { value: 1.2, provenance: 'catalogue' }, primaryInductanceH: 0.002 }) })), 'peak-current')).toBe('fail');
+  });
+});
+
+describe('ballast-plan', () => {
+  it('fails a ballast coil on points with no ballast', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coil: ballastCoil() })), 'ballast-plan')).toBe('fail');
+  });
+  it('cautions a ballast without a cranking bypass', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coil: ballastCoil(), ballast: ironBallast() })), 'ballast-plan')).toBe('caution');
+  });
+  it('passes a ballast coil with ballast and cranking bypass', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coil: ballastCoil(), ballast: ironBallast(), crankingBypass: true })), 'ballast-plan')).toBe('pass');
+  });
+  it('cautions a ballast in front of a current-limited module whose floor the coil meets alone', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(module(), { coil: ballastCoil(), ballast: ironBallast() })), 'ballast-plan')).toBe('caution');
+  });
+  it('cautions a ballast left in front of a CD module', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(cdModule(), { ballast: ironBallast() })), 'ballast-plan')).toBe('caution');
+  });
+  it('cautions a ballast in front of a full-voltage coil', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ ballast: ironBallast() })), 'ballast-plan')).toBe('caution');
+  });
+});
+
+describe('cranking-supply', () => {
+  it('fails a module with an 8 V minimum fed after the ballast while cranking', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ supplyMinV: 8, minCoilResistanceOhm: 0 }), { coil: ballastCoil(), ballast: ironBallast(), moduleFeed: 'after-ballast' })), 'cranking-supply')).toBe('fail');
+  });
+  it('cautions a module fed after the ballast even when the voltage holds', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ supplyMinV: 4, minCoilResistanceOhm: 0 }), { coil: ballastCoil(), ballast: ironBallast(), crankingBypass: true, moduleFeed: 'after-ballast' })), 'cranking-supply')).toBe('caution');
+  });
+  it('fails a module needing 10 V on a 9.6 V cranking battery (workshop load-test floor)', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ supplyMinV: 10 }))), 'cranking-supply')).toBe('fail');
+  });
+  it('passes a 6 V-minimum module fed from terminal 15', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty())), 'cranking-supply')).toBe('pass');
+  });
+});
+
+describe('earth-polarity', () => {
+  it('fails a negative-earth-only module on a positive-earth car', () => {
+    expect(verdict(checkSetup({ ...fourCylinder, earthPolarity: 'positive' }, moduleSetup(fixedDuty())), 'earth-polarity')).toBe('fail');
+  });
+  it('passes a module that supports both polarities', () => {
+    expect(verdict(checkSetup({ ...fourCylinder, earthPolarity: 'positive' }, moduleSetup(fixedDuty({ earthPolarities: ['negative', 'positive'] }))), 'earth-polarity')).toBe('pass');
+  });
+});
+
+describe('coil-polarity', () => {
+  it('passes a coil wired for the earth polarity and says which terminal goes where', () => {
+    const r = checkSetup({ ...fourCylinder, earthPolarity: 'positive' }, pointsSetup());
+    expect(verdict(r, 'coil-polarity')).toBe('pass');
+    expect(r.rules.find((x) => x.id === 'coil-polarity')!.action).toMatch(/positive earth/);
+  });
+  it('cautions a reversed coil that still keeps the margin, and raises the required voltage by about 11 %', () => {
+    const ok = checkSetup(fourCylinder, pointsSetup());
+    const rev = checkSetup(fourCylinder, pointsSetup({ coilWiring: 'reversed' }));
+    expect(verdict(rev, 'coil-polarity')).toBe('caution');
+    expect(rev.keyPoints.idle.requiredV / ok.keyPoints.idle.requiredV).toBeCloseTo(1 / 0.9, 6);
+  });
+  it('fails a reversed coil that loses the margin', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coilWiring: 'reversed', plugGapM: 1.1e-3 })), 'coil-polarity')).toBe('fail');
+  });
+});
+
+describe('tach', () => {
+  it('fails a current-sensing tachometer on a CD module', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(cdModule(), { tach: { name: 'Tach', senses: 'coil-supply-current' } })), 'tach')).toBe('fail');
+  });
+  it('cautions a pulse tachometer on a multi-spark CD module (over-reads at low rpm)', () => {
+    const m = cdModule({ cd: { capacitorF: 1e-6, chargeVoltageV: 400, chargerPowerW: 40, multiSparkBelowRpm: 3000 } });
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(m, { tach: { name: 'Tach', senses: 'coil-negative-pulses' } })), 'tach')).toBe('caution');
+  });
+  it('fails a tachometer needing a module output on a module without one', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty(), { tach: { name: 'Tach', senses: 'module-output' } })), 'tach')).toBe('fail');
+  });
+  it('passes a coil-negative tachometer on an inductive module', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty(), { tach: { name: 'Tach', senses: 'coil-negative-pulses' } })), 'tach')).toBe('pass');
+  });
+  it('passes a cable-driven tachometer on anything', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(cdModule(), { tach: { name: 'Tach', senses: 'cable' } })), 'tach')).toBe('pass');
+  });
+});
+
+describe('spark-energy', () => {
+  it('fails a coil whose energy falls below 5 mJ before redline', () => {
+    const weak = coil({ primaryResistanceOhm20C: { value: 6, provenance: 'catalogue' }, primaryInductanceH: 0.002 });
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coil: weak })), 'spark-energy')).toBe('fail');
+  });
+  it('cautions a candidate giving under 90 % of the existing energy', () => {
+    const c = compareSetups({ engine: fourCylinder, existing: pointsSetup(), candidates: [pointsSetup({ label: 'softer', coil: coil({ primaryInductanceH: 0.006 }) })] });
+    expect(verdict(c.candidates[0]!, 'spark-energy')).toBe('caution');
+  });
+  it('passes a CD module against points', () => {
+    const c = compareSetups({ engine: fourCylinder, existing: pointsSetup(), candidates: [moduleSetup(cdModule())] });
+    expect(verdict(c.candidates[0]!, 'spark-energy')).toBe('pass');
+  });
+});
+
+describe('voltage-reserve', () => {
+  it('fails when the available voltage is below the required at some rpm', () => {
+    const weak = coil({ turnsRatio: 40 });
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coil: weak, plugGapM: 1.1e-3 })), 'voltage-reserve')).toBe('fail');
+  });
+  it('cautions under the 1.25 margin (common practice)', () => {
+    const r = checkSetup(fourCylinder, pointsSetup({ coil: coil({ turnsRatio: 45 }) }));
+    expect(r.worstReserveRatio).toBeGreaterThan(1);
+    expect(r.worstReserveRatio).toBeLessThan(1.25);
+    expect(verdict(r, 'voltage-reserve')).toBe('caution');
+  });
+  it('passes a healthy points setup at 0.7 mm', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup()), 'voltage-reserve')).toBe('pass');
+  });
+});
+
+describe('spark-rate', () => {
+  it('fails a module limited to 150 sparks a second on an engine needing 200 at redline', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ maxSparkRateHz: 150 }))), 'spark-rate')).toBe('fail');
+  });
+  it('cautions within 10 % of the limit', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ maxSparkRateHz: 210 }))), 'spark-rate')).toBe('caution');
+  });
+  it('cautions points that float before redline', () => {
+    expect(verdict(checkSetup({ ...fourCylinder, pointsFloatRpm: 5000 }, pointsSetup()), 'spark-rate')).toBe('caution');
+  });
+  it('passes a 400 Hz module on a 6000 rpm four', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty())), 'spark-rate')).toBe('pass');
+  });
+});
+
+describe('key-on-heat', () => {
+  it('fails a 1.5 ohm ballast coil on 14 V without ballast', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ coil: ballastCoil() })), 'key-on-heat')).toBe('fail');
+  });
+  it('cautions a 3 ohm coil on points (current flows while the points rest closed)', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup()), 'key-on-heat')).toBe('caution');
+  });
+  it('passes a module with a stall shut-off', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(module({ stallShutOff: true }))), 'key-on-heat')).toBe('pass');
+  });
+});
+
+describe('six-volt', () => {
+  const six = { ...fourCylinder, systemVoltageV: 6 as const };
+  it('fails a module needing 8 V on a 6 V system', () => {
+    expect(verdict(checkSetup(six, moduleSetup(fixedDuty({ supplyMinV: 8 }))), 'six-volt')).toBe('fail');
+  });
+  it('cautions a 12 V coil on a 6 V system', () => {
+    expect(verdict(checkSetup(six, pointsSetup()), 'six-volt')).toBe('caution');
+  });
+  it('passes a 6 V coil on a 6 V system', () => {
+    expect(verdict(checkSetup(six, pointsSetup({ coil: coil({ ratedVoltageV: 6, primaryResistanceOhm20C: { value: 1.5, provenance: 'catalogue' } }) })), 'six-volt')).toBe('pass');
+  });
+  it('uses 7.2 V running and 4.8 V cranking on 6 V (from memory)', () => {
+    const r = checkSetup(six, pointsSetup());
+    expect(r.circuit.runningSupplyV).toBeCloseTo(7.2, 6);
+    expect(r.circuit.crankingSupplyV).toBeCloseTo(4.79, 2);
+  });
+});
+
+describe('condenser', () => {
+  it('fails points without a condenser', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ condenserF: null })), 'condenser')).toBe('fail');
+  });
+  it('cautions a condenser left across an inductive module', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty(), { condenserF: 0.22e-6 })), 'condenser')).toBe('caution');
+  });
+  it('fails a condenser left across a CD coil', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(cdModule(), { condenserF: 0.22e-6 })), 'condenser')).toBe('fail');
+  });
+  it('passes points with a 0.22 uF condenser', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup()), 'condenser')).toBe('pass');
+  });
+});
+
+describe('suppressed-leads', () => {
+  it('fails copper leads and plain plugs on a module that needs suppression', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ needsSuppressedLeads: true }), { leads: { name: 'Copper', core: 'copper', resistancePerLeadOhm: 0.5 } })), 'suppressed-leads')).toBe('fail');
+  });
+  it('cautions when the leads are not recorded', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ needsSuppressedLeads: true }), { leads: null })), 'suppressed-leads')).toBe('caution');
+  });
+  it('passes carbon leads', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ needsSuppressedLeads: true }))), 'suppressed-leads')).toBe('pass');
+  });
+});
+
+describe('off-time', () => {
+  it('cautions a current-limited module at 80 % maximum duty near redline (switch closes mid-spark)', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(module())), 'off-time')).toBe('caution');
+  });
+  it('fails a module at 95 % duty that closes before a third of the spark', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(fixedDuty({ fixedDutyFraction: 0.95 }))), 'off-time')).toBe('fail');
+  });
+  it('passes a CD module (short spark, no charging between sparks)', () => {
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(cdModule())), 'off-time')).toBe('pass');
+  });
+});
+
+describe('plug-gap', () => {
+  it('cautions a gap wider than the largest that keeps the margin', () => {
+    const r = checkSetup(fourCylinder, pointsSetup({ coil: coil({ turnsRatio: 70 }), plugGapM: 1.0e-3 }));
+    expect(r.gap?.suggestedGapM).not.toBeNull();
+    expect(verdict(r, 'plug-gap')).toBe('caution');
+  });
+  it('cautions a gap outside the plug range', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ plugGapM: 1.5e-3 })), 'plug-gap')).toBe('caution');
+  });
+  it('passes 0.7 mm with a suggestion at or above it', () => {
+    const r = checkSetup(fourCylinder, pointsSetup());
+    expect(verdict(r, 'plug-gap')).toBe('pass');
+    expect(r.gap!.suggestedGapM!).toBeGreaterThanOrEqual(0.7e-3);
+  });
+});
+
+describe('module-heat', () => {
+  it('cautions or fails a current-limited module holding the limit long on a low-resistance coil', () => {
+    // Held 3 ms at 5 A: (14 - 1.5 - 5 x 0.6) x 5 = 47.5 W for 3 ms of each 5 ms period at redline.
+    const low = coil({ primaryResistanceOhm20C: { value: 0.4, provenance: 'catalogue' }, primaryInductanceH: 0.003 });
+    const v = verdict(checkSetup(fourCylinder, moduleSetup(module({ currentLimitA: 5, maxCurrentA: 40, minCoilResistanceOhm: 0 }), { coil: low }), { currentLimitHoldS: { value: 3e-3, provenance: 'measured' } }), 'module-heat');
+    expect(['caution', 'fail']).toContain(v);
+  });
+  it('passes a current-limited module with dwell control on the same coil (it holds the limit only briefly)', () => {
+    const low = coil({ primaryResistanceOhm20C: { value: 0.4, provenance: 'catalogue' }, primaryInductanceH: 0.003 });
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(module({ currentLimitA: 5, maxCurrentA: 40, minCoilResistanceOhm: 0 }), { coil: low })), 'module-heat')).toBe('pass');
+  });
+});
+
+describe('setup-complete', () => {
+  it('fails a module setup without a module, and still gives finite figures', () => {
+    const r = checkSetup(fourCylinder, pointsSetup({ switching: 'breakerless-fixed-duty', module: null }));
+    expect(verdict(r, 'setup-complete')).toBe('fail');
+    expect(r.points.every((p) => Number.isFinite(p.availableV))).toBe(true);
+  });
+  it('fails a magneto with no output figures', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup({ switching: 'magneto', magneto: null })), 'setup-complete')).toBe('fail');
+  });
+  it('passes a complete points setup', () => {
+    expect(verdict(checkSetup(fourCylinder, pointsSetup()), 'setup-complete')).toBe('pass');
+  });
+});
