@@ -7,7 +7,7 @@
  */
 import type { EngineInput, ExistingSetup } from '../schema.js';
 
-export const DEMO_WORKSHOP_NAME = "Tanner's Yard Restorations";
+export const DEMO_WORKSHOP_NAME = "Sparrowgate Restoration Shed";
 
 /** The existing setup as the demo writes it: parts named by their demo name, resolved to ids on load. */
 export type DemoExisting = Omit<ExistingSetup, 'coilPartId' | 'ballastPartId' | 'tachPartId' | 'leadsPartId' | 'plugPartId'> & {

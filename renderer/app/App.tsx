@@ -1,0 +1,193 @@
+/**
+ * The frame: a side list of screens, a top bar with the engine being worked on, the gap unit and
+ * the demo loader, and the screen itself. Every move between screens passes the leave guard, so
+ * unsaved edits are never dropped without asking.
+ */
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import type { ResponseOf } from '../../electron/ipc/channels.js';
+import { EngineEditor } from '../screens/engines/EngineEditor.js';
+import { EngineList } from '../screens/engines/EngineList.js';
+import { call } from './bridge.js';
+import { loadCurrentEngine, saveCurrentEngine, type CurrentEngine } from './current-engine.js';
+import { DemoLoader } from './DemoLoader.js';
+import { Confirm } from './Dialog.js';
+import { LaterScreen, laterText } from './LaterScreen.js';
+import { LeaveGuardContext, type LeaveCheck, type LeaveGuard } from './leave-guard.js';
+import { Notice, type NoticeKind } from './Notice.js';
+import { screenOf, screens, type Route } from './routes.js';
+import { UnitToggle } from './UnitToggle.js';
+
+type Flash = { kind: NoticeKind; text: string } | null;
+
+export function App(): ReactNode {
+  const [route, setRoute] = useState<Route>({ to: 'engines' });
+  const [current, setCurrentState] = useState<CurrentEngine | null>(loadCurrentEngine);
+  const [pending, setPending] = useState<{ route: Route; what: string } | null>(null);
+  const [flash, setFlash] = useState<Flash>(null);
+  const [listVersion, setListVersion] = useState(0);
+  const [info, setInfo] = useState<ResponseOf<'app.info'> | null>(null);
+  const checkRef = useRef<LeaveCheck | null>(null);
+  const mainRef = useRef<HTMLElement>(null);
+
+  const guard = useMemo<LeaveGuard>(
+    () => ({
+      register(check) {
+        checkRef.current = check;
+        return () => {
+          if (checkRef.current === check) checkRef.current = null;
+        };
+      },
+    }),
+    [],
+  );
+
+  const setCurrent = useCallback((c: CurrentEngine | null) => {
+    setCurrentState(c);
+    saveCurrentEngine(c);
+  }, []);
+
+  const go = useCallback((r: Route) => {
+    setRoute(r);
+    setFlash(null);
+    // Move focus to the new screen's heading so keyboard and screen-reader users follow along.
+    requestAnimationFrame(() => mainRef.current?.querySelector<HTMLElement>('h1')?.focus());
+  }, []);
+
+  const navigate = useCallback(
+    (r: Route) => {
+      const c = checkRef.current?.();
+      if (c?.dirty) setPending({ route: r, what: c.what });
+      else go(r);
+    },
+    [go],
+  );
+
+  useEffect(() => {
+    void call('app.info', {}).then((r) => {
+      if (r.ok) setInfo(r.value);
+      else setFlash({ kind: 'problem', text: r.error.message });
+    });
+  }, []);
+
+  // The remembered engine may have been deleted elsewhere; check it still exists and its name.
+  useEffect(() => {
+    if (!current) return;
+    void call('engines.get', { id: current.id }).then((r) => {
+      if (r.ok && r.value.name !== current.name) setCurrent({ id: r.value.id, name: r.value.name });
+      if (!r.ok && r.error.code === 'NOT_FOUND') setCurrent(null);
+    });
+    // Only on start: later changes come from the screens themselves.
+  }, []);
+
+  const active = screenOf(route);
+  let screen: ReactNode;
+  switch (route.to) {
+    case 'engines':
+      screen = <EngineList navigate={navigate} version={listVersion} onDeleted={(id) => current?.id === id && setCurrent(null)} />;
+      break;
+    case 'engine':
+    case 'new-engine':
+      screen = (
+        <EngineEditor
+          key={route.to === 'engine' ? `e${route.id}` : 'new'}
+          id={route.to === 'engine' ? route.id : null}
+          navigate={navigate}
+          leave={go}
+          onOpened={(e) => setCurrent({ id: e.id, name: e.name })}
+          onDeleted={(id) => {
+            if (current?.id === id) setCurrent(null);
+            setFlash({ kind: 'done', text: 'The engine was deleted.' });
+          }}
+        />
+      );
+      break;
+    case 'parts':
+      screen = <LaterScreen title="Parts on the shelf" what={laterText.parts} />;
+      break;
+    case 'combination':
+      screen = <LaterScreen title="Weigh a combination" what={laterText.combination} />;
+      break;
+    case 'sheet':
+      screen = <LaterScreen title="Wiring sheet" what={laterText.sheet} />;
+      break;
+  }
+
+  return (
+    <LeaveGuardContext.Provider value={guard}>
+      <a className="skip-link" href="#main">
+        Skip to the screen
+      </a>
+      <div className="app">
+        <header className="topbar">
+          <span className="brand">Ignition Planner</span>
+          <div className="working-on">
+            {current ? (
+              <button type="button" className="chip" onClick={() => navigate({ to: 'engine', id: current.id })} data-testid="current-engine">
+                <span className="chip-label">Working on:</span> {current.name}
+              </button>
+            ) : (
+              <span className="chip quiet" data-testid="current-engine">
+                <span className="chip-label">Working on:</span> no engine chosen yet
+              </span>
+            )}
+          </div>
+          <div className="tools">
+            <UnitToggle />
+            <DemoLoader
+              onLoaded={(text) => {
+                setFlash({ kind: 'done', text });
+                setListVersion((v) => v + 1);
+              }}
+              onProblem={(text) => setFlash({ kind: 'problem', text })}
+            />
+          </div>
+        </header>
+        <div className="body">
+          <nav className="sidebar" aria-label="Screens">
+            <ul>
+              {screens.map((s) => (
+                <li key={s.to}>
+                  <button type="button" className="nav-item" aria-current={active === s.to ? 'page' : undefined} onClick={() => navigate({ to: s.to })}>
+                    {s.label}
+                  </button>
+                </li>
+              ))}
+            </ul>
+            {info ? (
+              <p className="about" data-testid="about">
+                Version {info.version}
+                <br />
+                Workshop folder: <span className="path">{info.dataDir}</span>
+              </p>
+            ) : null}
+          </nav>
+          <main id="main" ref={mainRef} tabIndex={-1}>
+            {flash ? (
+              <Notice kind={flash.kind} onDismiss={() => setFlash(null)} testId="flash">
+                {flash.text}
+              </Notice>
+            ) : null}
+            {screen}
+          </main>
+        </div>
+      </div>
+      {pending ? (
+        <Confirm
+          title="Leave without saving?"
+          confirmLabel="Leave and lose the changes"
+          cancelLabel="Stay and keep editing"
+          danger
+          onConfirm={() => {
+            const to = pending.route;
+            setPending(null);
+            go(to);
+          }}
+          onCancel={() => setPending(null)}
+          testId="leave-dialog"
+        >
+          <p>{pending.what} has changes that are not saved. Leaving now throws them away.</p>
+        </Confirm>
+      ) : null}
+    </LeaveGuardContext.Provider>
+  );
+}

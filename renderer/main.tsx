@@ -1,0 +1,20 @@
+/** Entry point: installs the link guard and mounts the app. */
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from './app/App.js';
+import { bridge } from './app/bridge.js';
+import { guardLinks } from './app/links.js';
+import './styles/app.css';
+
+// Read the access key (and clear it from the address bar) before anything renders.
+bridge();
+guardLinks();
+
+const root = document.getElementById('root');
+if (root) {
+  createRoot(root).render(
+    <StrictMode>
+      <App />
+    </StrictMode>,
+  );
+}

@@ -1,0 +1,79 @@
+/**
+ * Deleting an engine, asking first. If the store answers IN_USE (plans are made for it), ask a
+ * second time, saying how many plans would go with it, and only then send deletePlansToo.
+ */
+import { useState, type ReactNode } from 'react';
+import { call } from '../../app/bridge.js';
+import { Confirm } from '../../app/Dialog.js';
+
+type Stage = { step: 'ask' } | { step: 'plans'; count: number } | { step: 'closed' };
+
+export function useDeleteEngine(onDone: (id: number, plansDeleted: number) => void, onProblem: (message: string) => void) {
+  const [target, setTarget] = useState<{ id: number; name: string } | null>(null);
+  const [stage, setStage] = useState<Stage>({ step: 'closed' });
+  const [busy, setBusy] = useState(false);
+
+  const close = (): void => {
+    setStage({ step: 'closed' });
+    setTarget(null);
+  };
+
+  const send = async (deletePlansToo: boolean): Promise<void> => {
+    if (!target) return;
+    setBusy(true);
+    const r = await call('engines.delete', { id: target.id, deletePlansToo });
+    if (!r.ok && r.error.code === 'IN_USE' && !deletePlansToo) {
+      const plans = await call('plans.list', { engineId: target.id });
+      setBusy(false);
+      setStage({ step: 'plans', count: plans.ok ? plans.value.length : Number.NaN });
+      return;
+    }
+    setBusy(false);
+    const id = target.id;
+    close();
+    if (r.ok) onDone(id, r.value.plansDeleted);
+    else onProblem(r.error.message);
+  };
+
+  const dialog: ReactNode =
+    target && stage.step === 'ask' ? (
+      <Confirm
+        title={`Delete ${target.name}?`}
+        confirmLabel="Delete the engine"
+        cancelLabel="Keep it"
+        danger
+        busy={busy}
+        onConfirm={() => void send(false)}
+        onCancel={close}
+        testId="delete-dialog"
+      >
+        <p>The engine and everything recorded about it are removed from this workshop. This cannot be undone.</p>
+      </Confirm>
+    ) : target && stage.step === 'plans' ? (
+      <Confirm
+        title={`${target.name} has conversion plans`}
+        confirmLabel={Number.isFinite(stage.count) ? `Delete the engine and its ${stage.count === 1 ? 'plan' : `${stage.count} plans`}` : 'Delete the engine and its plans'}
+        cancelLabel="Keep it"
+        danger
+        busy={busy}
+        onConfirm={() => void send(true)}
+        onCancel={close}
+        testId="delete-plans-dialog"
+      >
+        <p>
+          {Number.isFinite(stage.count)
+            ? `There ${stage.count === 1 ? 'is 1 conversion plan' : `are ${stage.count} conversion plans`} for this engine.`
+            : 'There are conversion plans for this engine.'}{' '}
+          Deleting the engine deletes {stage.count === 1 ? 'that plan' : 'those plans'} too, with the readings taken for {stage.count === 1 ? 'it' : 'them'}. This cannot be undone.
+        </p>
+      </Confirm>
+    ) : null;
+
+  return {
+    ask: (engine: { id: number; name: string }) => {
+      setTarget(engine);
+      setStage({ step: 'ask' });
+    },
+    dialog,
+  };
+}

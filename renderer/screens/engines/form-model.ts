@@ -1,0 +1,297 @@
+/**
+ * The engine form as the person sees it: every number is kept as the text they typed, so a
+ * half-typed "0," or a blank never turns into NaN. `formToInput` reads the text back into an
+ * `EngineInput` and checks it with the same zod schema the store uses, returning messages keyed
+ * by the schema's paths ("existing.plugGapMm", "advanceCurve.2.rpm").
+ */
+import { engineInput, fieldMessages, type Engine, type EngineInput } from '../../../db/schema.js';
+import { numberToText, parseNumberText, parseOptionalNumberText } from '../../app/numbers.js';
+import { gapText, unitToMm, type GapUnit } from '../../app/units.js';
+
+/** A gap as typed, plus its exact value in mm (null while the text cannot be read). */
+export type GapValue = { text: string; mm: number | null };
+export type CurveRow = { key: number; rpm: string; advanceDeg: string };
+
+export type EngineForm = {
+  name: string;
+  yearText: string;
+  modelText: string;
+  notes: string;
+  cylinders: string;
+  cycle: EngineInput['cycle'];
+  firingOrder: string;
+  boreMm: string;
+  strokeMm: string;
+  conRodMm: string;
+  compressionRatio: string;
+  crankingRpm: string;
+  idleRpm: string;
+  redlineRpm: string;
+  systemVoltageV: '6' | '12';
+  earthPolarity: EngineInput['earthPolarity'];
+  charging: EngineInput['charging'];
+  pointsDwellDeg: string;
+  pointsGap: GapValue;
+  staticTimingDegBtdc: string;
+  pointsFloatRpm: string;
+  advanceCurve: CurveRow[];
+  existing: {
+    trigger: EngineInput['existing']['trigger'];
+    coilPartId: string;
+    ballast: EngineInput['existing']['ballast'];
+    ballastPartId: string;
+    crankingBypass: boolean;
+    condenserUf: string;
+    tachPartId: string;
+    leadsPartId: string;
+    plugPartId: string;
+    plugGap: GapValue;
+    magnetoRatedCurrentA: string;
+    magnetoFullOutputRpm: string;
+  };
+  conditions: Record<ConditionKey, string>;
+};
+
+export const conditionKeys = ['runningSupplyV', 'crankingSupplyV', 'harnessResistanceOhm', 'ambientC', 'underBonnetC', 'volumetricEfficiency'] as const;
+export type ConditionKey = (typeof conditionKeys)[number];
+
+let rowKey = 1;
+export const nextRowKey = (): number => rowKey++;
+
+export function gapFromMm(mm: number | null, unit: GapUnit): GapValue {
+  return { text: gapText(mm, unit), mm };
+}
+
+/** What the person typed into a gap box, read in the unit shown beside it. */
+export function gapFromText(text: string, unit: GapUnit): GapValue {
+  const p = parseNumberText(text, 'Gap');
+  return { text, mm: p.ok ? unitToMm(p.value, unit) : null };
+}
+
+/** Re-shows a gap in another unit without changing the stored millimetres. */
+export function regap(g: GapValue, unit: GapUnit): GapValue {
+  return g.mm === null ? g : { text: gapText(g.mm, unit), mm: g.mm };
+}
+
+const idText = (v: number | null): string => (v === null ? '' : String(v));
+
+/**
+ * Starting values for a new engine: a four-cylinder four-stroke with the speeds, dwell, gaps and
+ * timing common in workshop manuals of the points era (common practice). Geometry is left blank
+ * because it is different for every engine and a guess there would quietly skew every check.
+ */
+export function blankForm(unit: GapUnit): EngineForm {
+  return {
+    name: '',
+    yearText: '',
+    modelText: '',
+    notes: '',
+    cylinders: '4',
+    cycle: 'four-stroke',
+    firingOrder: '1-3-4-2',
+    boreMm: '',
+    strokeMm: '',
+    conRodMm: '',
+    compressionRatio: '',
+    crankingRpm: '200',
+    idleRpm: '800',
+    redlineRpm: '6000',
+    systemVoltageV: '12',
+    earthPolarity: 'negative',
+    charging: 'dynamo',
+    pointsDwellDeg: '54',
+    pointsGap: gapFromMm(0.38, unit),
+    staticTimingDegBtdc: '8',
+    pointsFloatRpm: '',
+    advanceCurve: [],
+    existing: {
+      trigger: 'points',
+      coilPartId: '',
+      ballast: 'none',
+      ballastPartId: '',
+      crankingBypass: false,
+      condenserUf: '0.22',
+      tachPartId: '',
+      leadsPartId: '',
+      plugPartId: '',
+      plugGap: gapFromMm(0.6, unit),
+      magnetoRatedCurrentA: '',
+      magnetoFullOutputRpm: '',
+    },
+    conditions: { runningSupplyV: '', crankingSupplyV: '', harnessResistanceOhm: '', ambientC: '', underBonnetC: '', volumetricEfficiency: '' },
+  };
+}
+
+export function engineToForm(e: Engine, unit: GapUnit): EngineForm {
+  const n = (v: number | null | undefined): string => numberToText(v, 6);
+  const c = e.conditions;
+  return {
+    name: e.name,
+    yearText: e.yearText,
+    modelText: e.modelText,
+    notes: e.notes,
+    cylinders: n(e.cylinders),
+    cycle: e.cycle,
+    firingOrder: e.firingOrder,
+    boreMm: n(e.boreMm),
+    strokeMm: n(e.strokeMm),
+    conRodMm: n(e.conRodMm),
+    compressionRatio: n(e.compressionRatio),
+    crankingRpm: n(e.crankingRpm),
+    idleRpm: n(e.idleRpm),
+    redlineRpm: n(e.redlineRpm),
+    systemVoltageV: e.systemVoltageV === 6 ? '6' : '12',
+    earthPolarity: e.earthPolarity,
+    charging: e.charging,
+    pointsDwellDeg: n(e.pointsDwellDeg),
+    pointsGap: gapFromMm(e.pointsGapMm, unit),
+    staticTimingDegBtdc: n(e.staticTimingDegBtdc),
+    pointsFloatRpm: n(e.pointsFloatRpm),
+    advanceCurve: e.advanceCurve.map((p) => ({ key: nextRowKey(), rpm: n(p.rpm), advanceDeg: n(p.advanceDeg) })),
+    existing: {
+      trigger: e.existing.trigger,
+      coilPartId: idText(e.existing.coilPartId),
+      ballast: e.existing.ballast,
+      ballastPartId: idText(e.existing.ballastPartId),
+      crankingBypass: e.existing.crankingBypass,
+      condenserUf: n(e.existing.condenserUf),
+      tachPartId: idText(e.existing.tachPartId),
+      leadsPartId: idText(e.existing.leadsPartId),
+      plugPartId: idText(e.existing.plugPartId),
+      plugGap: gapFromMm(e.existing.plugGapMm, unit),
+      magnetoRatedCurrentA: n(e.existing.magnetoRatedCurrentA),
+      magnetoFullOutputRpm: n(e.existing.magnetoFullOutputRpm),
+    },
+    conditions: {
+      runningSupplyV: n(c.runningSupplyV),
+      crankingSupplyV: n(c.crankingSupplyV),
+      harnessResistanceOhm: n(c.harnessResistanceOhm),
+      ambientC: n(c.ambientC),
+      underBonnetC: n(c.underBonnetC),
+      volumetricEfficiency: n(c.volumetricEfficiency),
+    },
+  };
+}
+
+/** The labels used in "must be a number" messages, by schema path. */
+export const numberLabels: Record<string, string> = {
+  cylinders: 'Cylinders',
+  boreMm: 'Bore',
+  strokeMm: 'Stroke',
+  conRodMm: 'Connecting-rod length',
+  compressionRatio: 'Compression ratio',
+  crankingRpm: 'Cranking speed',
+  idleRpm: 'Idle speed',
+  redlineRpm: 'Redline',
+  pointsDwellDeg: 'Dwell angle',
+  pointsGapMm: 'Points gap',
+  staticTimingDegBtdc: 'Static timing',
+  pointsFloatRpm: 'Points float rpm',
+  'existing.condenserUf': 'Condenser',
+  'existing.plugGapMm': 'Plug gap',
+  'existing.magnetoRatedCurrentA': 'Magneto rated current',
+  'existing.magnetoFullOutputRpm': 'Magneto full-output rpm',
+  'conditions.runningSupplyV': 'Running supply',
+  'conditions.crankingSupplyV': 'Cranking supply',
+  'conditions.harnessResistanceOhm': 'Harness resistance',
+  'conditions.ambientC': 'Air temperature',
+  'conditions.underBonnetC': 'Under-bonnet temperature',
+  'conditions.volumetricEfficiency': 'Volumetric efficiency',
+};
+
+export type FormCheck = { ok: true; input: EngineInput } | { ok: false; errors: Record<string, string> };
+
+/** Reads the form into an EngineInput and checks it exactly as the store will. */
+export function formToInput(f: EngineForm): FormCheck {
+  const errors: Record<string, string> = {};
+  const num = (path: string, text: string): number => {
+    const p = parseNumberText(text, numberLabels[path] ?? 'This value');
+    if (p.ok) return p.value;
+    errors[path] = p.message;
+    return Number.NaN; // never sent: the errors above stop the save
+  };
+  const opt = (path: string, text: string): number | null => {
+    const p = parseOptionalNumberText(text, numberLabels[path] ?? 'This value');
+    if (p.ok) return p.value;
+    errors[path] = p.message;
+    return null;
+  };
+  const gap = (path: string, g: GapValue): number => {
+    if (g.mm !== null) return g.mm;
+    const p = parseNumberText(g.text, numberLabels[path] ?? 'Gap');
+    errors[path] = p.ok ? `${numberLabels[path] ?? 'Gap'} could not be read.` : p.message;
+    return Number.NaN;
+  };
+  const partId = (v: string): number | null => (v === '' ? null : Number(v));
+  const magneto = f.existing.trigger === 'magneto';
+  const conditions: Record<string, number> = {};
+  for (const k of conditionKeys) {
+    const v = opt(`conditions.${k}`, f.conditions[k]);
+    if (v !== null) conditions[k] = v;
+  }
+  const candidate = {
+    name: f.name,
+    yearText: f.yearText.trim(),
+    modelText: f.modelText.trim(),
+    notes: f.notes,
+    cylinders: num('cylinders', f.cylinders),
+    cycle: f.cycle,
+    firingOrder: f.firingOrder.trim().replace(/\s*-\s*/g, '-'),
+    boreMm: num('boreMm', f.boreMm),
+    strokeMm: num('strokeMm', f.strokeMm),
+    conRodMm: num('conRodMm', f.conRodMm),
+    compressionRatio: num('compressionRatio', f.compressionRatio),
+    idleRpm: num('idleRpm', f.idleRpm),
+    crankingRpm: num('crankingRpm', f.crankingRpm),
+    redlineRpm: num('redlineRpm', f.redlineRpm),
+    systemVoltageV: f.systemVoltageV === '6' ? 6 : 12,
+    earthPolarity: f.earthPolarity,
+    charging: f.charging,
+    pointsDwellDeg: num('pointsDwellDeg', f.pointsDwellDeg),
+    pointsGapMm: gap('pointsGapMm', f.pointsGap),
+    pointsFloatRpm: opt('pointsFloatRpm', f.pointsFloatRpm),
+    staticTimingDegBtdc: num('staticTimingDegBtdc', f.staticTimingDegBtdc),
+    advanceCurve: f.advanceCurve.map((row, i) => ({
+      rpm: num(`advanceCurve.${i}.rpm`, row.rpm),
+      advanceDeg: num(`advanceCurve.${i}.advanceDeg`, row.advanceDeg),
+    })),
+    existing: {
+      trigger: f.existing.trigger,
+      coilPartId: partId(f.existing.coilPartId),
+      ballast: f.existing.ballast,
+      ballastPartId: f.existing.ballast === 'none' ? null : partId(f.existing.ballastPartId),
+      crankingBypass: f.existing.ballast === 'none' ? false : f.existing.crankingBypass,
+      condenserUf: opt('existing.condenserUf', f.existing.condenserUf),
+      tachPartId: partId(f.existing.tachPartId),
+      leadsPartId: partId(f.existing.leadsPartId),
+      plugPartId: partId(f.existing.plugPartId),
+      plugGapMm: gap('existing.plugGapMm', f.existing.plugGap),
+      magnetoRatedCurrentA: magneto ? opt('existing.magnetoRatedCurrentA', f.existing.magnetoRatedCurrentA) : null,
+      magnetoFullOutputRpm: magneto ? opt('existing.magnetoFullOutputRpm', f.existing.magnetoFullOutputRpm) : null,
+    },
+    conditions,
+  };
+  const parsed = engineInput.safeParse(candidate);
+  if (parsed.success && Object.keys(errors).length === 0) return { ok: true, input: parsed.data };
+  // Our own "type a number" messages win over zod's, which only sees the NaN we put in their place.
+  const fromSchema = parsed.success ? {} : fieldMessages(parsed.error);
+  return { ok: false, errors: { ...fromSchema, ...errors } };
+}
+
+/** Server field paths are relative to the request (`engine.boreMm`); the form's are not. */
+export function serverFieldsToForm(fields: Record<string, string> | undefined): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const [k, v] of Object.entries(fields ?? {})) out[k.replace(/^engine\./, '')] = v;
+  return out;
+}
+
+/** A fingerprint for "has anything changed?": gaps compared by their millimetres, not their text. */
+export function formFingerprint(f: EngineForm): string {
+  const g = (v: GapValue): string => (v.mm === null ? `text:${v.text}` : `mm:${v.mm}`);
+  return JSON.stringify({
+    ...f,
+    pointsGap: g(f.pointsGap),
+    advanceCurve: f.advanceCurve.map((r) => [r.rpm, r.advanceDeg]),
+    existing: { ...f.existing, plugGap: g(f.existing.plugGap) },
+  });
+}

@@ -1,0 +1,49 @@
+/**
+ * The renderer's boundary, checked on its source: it imports no Node code, only React, zod, its
+ * own files and the two shared contract files (db/schema.ts, electron/ipc/channels.ts).
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { projectRoot } from './harness.js';
+
+const rendererDir = path.join(projectRoot, 'renderer');
+const allowedPackages = new Set(['react', 'react-dom/client', 'react/jsx-runtime', 'zod']);
+const allowedShared = new Set([path.join(projectRoot, 'db', 'schema.ts'), path.join(projectRoot, 'electron', 'ipc', 'channels.ts')]);
+
+function sourceFiles(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const full = path.join(dir, name);
+    if (statSync(full).isDirectory()) return sourceFiles(full);
+    return /\.(ts|tsx)$/.test(name) && name !== 'vite.config.ts' ? [full] : [];
+  });
+}
+
+function importsOf(file: string): string[] {
+  const text = readFileSync(file, 'utf8');
+  const found: string[] = [];
+  for (const m of text.matchAll(/(?:import|export)\s[^'"]*?from\s+['"]([^'"]+)['"]|import\s+['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
+    found.push((m[1] ?? m[2] ?? m[3])!);
+  }
+  return found;
+}
+
+describe('the renderer boundary', () => {
+  it('imports only React, zod, its own files and the two shared contract files', () => {
+    const files = sourceFiles(rendererDir);
+    expect(files.length).toBeGreaterThan(10);
+    const offences: string[] = [];
+    for (const file of files) {
+      for (const spec of importsOf(file)) {
+        if (spec.startsWith('.')) {
+          const target = path.resolve(path.dirname(file), spec).replace(/\.js$/, '.ts');
+          const inside = target.startsWith(rendererDir + path.sep);
+          if (!inside && !allowedShared.has(target)) offences.push(`${path.relative(projectRoot, file)} imports ${spec}`);
+        } else if (!allowedPackages.has(spec)) {
+          offences.push(`${path.relative(projectRoot, file)} imports the package ${spec}`);
+        }
+      }
+    }
+    expect(offences).toEqual([]);
+  });
+});
