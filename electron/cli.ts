@@ -1,0 +1,34 @@
+/**
+ * The command line: the same checker, setup adapter and deck exporter as the app, JSON in and out.
+ * Refusals go to stderr as `field: why` lines with exit code 2, never as a stack trace.
+ */
+import { parseArgs } from './cli/args.js';
+import { checkCommand, netlistCommand, searchCommand } from './cli/commands.js';
+import { CliError } from './cli/errors.js';
+import { usage } from './cli/help.js';
+
+const commands: Record<string, (args: ReturnType<typeof parseArgs>) => string> = {
+  check: checkCommand,
+  search: searchCommand,
+  netlist: netlistCommand,
+};
+
+export function runCli(argv: readonly string[]): { code: number; stdout: string; stderr: string } {
+  const args = parseArgs(argv);
+  if (args.flags.get('help') === true || args.command === 'help') return { code: 0, stdout: usage, stderr: '' };
+  if (args.command === null) return { code: 2, stdout: '', stderr: `Give a command: check, search or netlist.\n\n${usage}` };
+  const run = commands[args.command];
+  if (!run) return { code: 2, stdout: '', stderr: `Unknown command "${args.command}": use check, search or netlist (or --help).\n` };
+  try {
+    return { code: 0, stdout: run(args), stderr: '' };
+  } catch (e) {
+    if (e instanceof CliError) return { code: e.exitCode, stdout: '', stderr: `${e.message}\n` };
+    const message = e instanceof Error ? e.message : String(e);
+    return { code: 1, stdout: '', stderr: `Internal fault: ${message}\nPlease report this with the input file.\n` };
+  }
+}
+
+const result = runCli(process.argv.slice(2));
+if (result.stdout) process.stdout.write(result.stdout);
+if (result.stderr) process.stderr.write(result.stderr);
+process.exitCode = result.code;

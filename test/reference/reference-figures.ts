@@ -1,0 +1,37 @@
+/**
+ * The checker's figures that ngspice can reproduce, at one sweep point. ngspice simulates the
+ * circuit without the checker's transfer efficiency (a labelled coil-loss assumption it cannot
+ * see), so the secondary peaks compared are the checker's lossless ones: its peak divided by the
+ * efficiency, and never above the clamp (n x V_clamp), which is a hard physical limit in both.
+ */
+import type { OperatingPoint, SetupReport } from '../../electron/checker/index.js';
+
+export interface CheckerFigures {
+  currentAtBreakA: number;
+  storedEnergyJ: number;
+  losslessPeakV: number;
+  losslessFouledPeakV: number;
+}
+
+export function checkerFigures(report: SetupReport, p: OperatingPoint): CheckerFigures {
+  const c = report.circuit;
+  const cap = c.primaryClampV !== null ? c.turnsRatio * c.primaryClampV : Infinity;
+  const eta = c.transferEfficiency;
+  const lossless = (v: number): number => (v >= cap ? cap : Math.min(v / eta, cap));
+  return {
+    currentAtBreakA: p.currentAtBreakA,
+    storedEnergyJ: p.storedEnergyJ,
+    losslessPeakV: lossless(p.availableV),
+    losslessFouledPeakV: lossless(p.fouledPeakV),
+  };
+}
+
+/** Three running-supply sweep points: idle, the middle of the range, and the top of the sweep. */
+export function threeRunningPoints(report: SetupReport): OperatingPoint[] {
+  const running = report.points.filter((p) => p.supplyCase === 'running');
+  const idle = report.keyPoints.idle;
+  const nearIdle = running.reduce((b, p) => (Math.abs(p.rpm - idle.rpm) < Math.abs(b.rpm - idle.rpm) ? p : b), running[0]!);
+  return [nearIdle, running[Math.floor(running.length / 2)]!, running[running.length - 1]!];
+}
+
+export const ratio = (simulated: number, checker: number): number => Math.abs(simulated) / Math.abs(checker);

@@ -1,0 +1,39 @@
+/** The deck exporter is pure: no Node built-ins, no Electron, no DOM, no database (architecture.md). */
+import { readdirSync, readFileSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { buildDeck, DeckError, spiceNumber } from '../../electron/spice/index.js';
+
+const dir = resolve(import.meta.dirname, '../../electron/spice');
+
+describe('electron/spice', () => {
+  it('imports only its own modules and the pure checker', () => {
+    for (const file of readdirSync(dir).filter((f) => f.endsWith('.ts'))) {
+      const text = readFileSync(join(dir, file), 'utf8');
+      for (const m of text.matchAll(/from\s+'([^']+)'/g)) {
+        const spec = m[1]!;
+        expect(spec.startsWith('./') || spec === '../checker/index.js', `${file} imports ${spec}`).toBe(true);
+      }
+    }
+  });
+
+  it('writes mega as Meg and milli as m (SPICE reads M as milli)', () => {
+    expect(spiceNumber(100e6)).toBe('100Meg');
+    expect(spiceNumber(8e-3)).toBe('8m');
+    expect(spiceNumber(0.25e-6)).toBe('250n');
+    expect(spiceNumber(80e-12)).toBe('80p');
+    expect(() => spiceNumber(Number.NaN)).toThrow();
+  });
+
+  it('refuses a circuit with an impossible value, naming the field', () => {
+    const bad = {
+      title: 'bad',
+      primary: { supplyV: 14, harnessResistanceOhm: 0, ballastResistanceOhm: 0, coilResistanceOhm: -3, primaryInductanceH: 8e-3, contactResistanceOhm: 0, switchDropV: 0, currentLimitA: null, dwellS: 3e-3, condenserF: null, primaryClampV: null },
+      secondary: { turnsRatio: 100, secondaryCapacitanceF: 70e-12, secondaryResistanceOhm: 8000 },
+      cd: null,
+    };
+    expect(() => buildDeck(bad, 'break')).toThrow(DeckError);
+    expect(() => buildDeck(bad, 'break')).toThrow(/primary\.coilResistanceOhm: must be more than 0/);
+    expect(() => buildDeck({ ...bad, primary: { ...bad.primary, coilResistanceOhm: 3 } }, 'cd')).toThrow(/cd: a capacitive-discharge deck needs/);
+  });
+});
