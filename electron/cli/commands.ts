@@ -7,6 +7,7 @@ import { checkSetup, compareSetups, searchBest, CheckerInputError, type SetupRep
 import { comparisonInput, conditionInputs, engineSpec, existingSetupSpec, planSetupSpec, searchInput, SetupAdapterError } from '../setup/index.js';
 import { buildDeck, circuitFromReport, DeckError, ExportError, type Scenario } from '../spice/index.js';
 import { choiceFlag, intFlag, numberFlag, onePositional, onlyFlags, type ParsedArgs } from './args.js';
+import { ignitionCautions } from '../safety/cautions.js';
 import { CliError } from './errors.js';
 import { toJson } from './output.js';
 import { readBinFile, readPlanFile, type Workshop } from './plan-file.js';
@@ -68,6 +69,8 @@ export function checkCommand(args: ParsedArgs): string {
       rows: report.rows,
       existing: trimReport(report.existing, sweep),
       candidates: report.candidates.map((c) => trimReport(c, sweep)),
+      // The report says what to change on the ignition, so the workshop cautions go with it.
+      cautions: ignitionCautions.map((c) => c.text),
     });
   });
 }
@@ -99,6 +102,7 @@ export function searchCommand(args: ParsedArgs): string {
         keyPoints: c.report.keyPoints,
         rules: c.report.rules,
       })),
+      cautions: ignitionCautions.map((c) => c.text),
     });
   });
 }

@@ -71,6 +71,21 @@ describe('the command line on good input', () => {
     expect(out.existing.points).toBeUndefined();
   });
 
+  it('prints the workshop cautions with every report that says what to change on the ignition', () => {
+    for (const args of [['check', planExample], ['search', binExample, '--top', '1']]) {
+      const r = runCli(args);
+      expect(r.code, r.stderr).toBe(0);
+      const out = expectCleanJson(r.stdout);
+      const text = (out.cautions as string[]).join(' ');
+      // common practice: disconnect the battery, respect the high voltage and stored charge, fuel and fire, defer to service data
+      expect(text).toMatch(/battery earth lead/);
+      expect(text).toMatch(/kilovolts/);
+      expect(text).toMatch(/capacitor/);
+      expect(text).toMatch(/fuel/);
+      expect(text).toMatch(/service data/);
+    }
+  });
+
   it('includes the sweep when asked, and it is clean too', () => {
     const r = runCli(['check', planExample, '--sweep', '--rpm-points', '40']);
     expect(r.code, r.stderr).toBe(0);
