@@ -10,10 +10,16 @@ import { z } from 'zod';
 
 const id = z.number().int().positive();
 const text = (max: number) => z.string().max(max, `Keep this under ${max} characters.`);
-const positive = (what: string) =>
-  z.number({ error: `${what} must be a number.` }).finite().positive(`${what} must be more than zero.`);
-const nonNegative = (what: string) =>
-  z.number({ error: `${what} must be a number.` }).finite().min(0, `${what} cannot be negative.`);
+/**
+ * A number field. The schema-level message is only for "not a number"; every range check carries
+ * its own sentence, so a value that is too large never reads "must be a number".
+ */
+const numberOf = (what: string) =>
+  z.number({ error: (issue) => (issue.code === 'invalid_type' ? `${what} must be a number.` : undefined) }).finite(`${what} must be a finite number.`);
+const upTo = (schema: z.ZodNumber, what: string, max: number | undefined) =>
+  max === undefined ? schema : schema.max(max, `${what} above ${max} is not plausible.`);
+const positive = (what: string, max?: number) => upTo(numberOf(what).positive(`${what} must be more than zero.`), what, max);
+const nonNegative = (what: string, max?: number) => upTo(numberOf(what).min(0, `${what} cannot be negative.`), what, max);
 
 export const earthPolarity = z.enum(['negative', 'positive']);
 export const systemVoltage = z.union([z.literal(6), z.literal(12)], {
@@ -28,12 +34,12 @@ export const advancePoint = z.object({
 
 /** Operating conditions the user may override per engine; absent means "use the default". */
 export const conditionOverrides = z.object({
-  runningSupplyV: positive('Running supply').max(20).optional(),
-  crankingSupplyV: positive('Cranking supply').max(20).optional(),
-  harnessResistanceOhm: nonNegative('Harness resistance').max(5).optional(),
-  ambientC: z.number().finite().min(-40).max(60).optional(),
-  underBonnetC: z.number().finite().min(-40).max(150).optional(),
-  volumetricEfficiency: z.number().finite().min(0.3).max(1.3).optional(),
+  runningSupplyV: positive('Running supply', 20).optional(),
+  crankingSupplyV: positive('Cranking supply', 20).optional(),
+  harnessResistanceOhm: nonNegative('Harness resistance', 5).optional(),
+  ambientC: numberOf('Ambient temperature').min(-40, 'Ambient below -40 °C is not plausible.').max(60, 'Ambient above 60 °C is not plausible.').optional(),
+  underBonnetC: numberOf('Under-bonnet temperature').min(-40, 'Under-bonnet below -40 °C is not plausible.').max(150, 'Under-bonnet above 150 °C is not plausible.').optional(),
+  volumetricEfficiency: numberOf('Volumetric efficiency').min(0.3, 'Volumetric efficiency below 0.3 is not plausible.').max(1.3, 'Volumetric efficiency above 1.3 is not plausible.').optional(),
 });
 
 /** The ignition the engine has today: the baseline every candidate is compared with. */
@@ -43,14 +49,14 @@ export const existingSetup = z.object({
   ballast: z.enum(['none', 'discrete', 'harness-wire']),
   ballastPartId: id.nullable(),
   crankingBypass: z.boolean(),
-  condenserUf: positive('Condenser').max(2).nullable(),
+  condenserUf: positive('Condenser', 2).nullable(),
   tachPartId: id.nullable(),
   leadsPartId: id.nullable(),
   plugPartId: id.nullable(),
   plugGapMm: positive('Plug gap').max(3, 'A plug gap over 3 mm is not plausible.'),
   /** Magneto only: the break current it reaches at full output, and the rpm where it gets there. */
-  magnetoRatedCurrentA: positive('Magneto rated current').max(10).nullable().optional(),
-  magnetoFullOutputRpm: positive('Magneto full-output rpm').max(10000).nullable().optional(),
+  magnetoRatedCurrentA: positive('Magneto rated current', 10).nullable().optional(),
+  magnetoFullOutputRpm: positive('Magneto full-output rpm', 10000).nullable().optional(),
 });
 
 const engineFields = z.object({
@@ -63,17 +69,17 @@ const engineFields = z.object({
   firingOrder: z.string().trim().regex(/^\d+(-\d+)*$/, 'Write the firing order as numbers joined by dashes, for example 1-3-4-2.'),
   boreMm: positive('Bore').max(200, 'A bore over 200 mm is not plausible.'),
   strokeMm: positive('Stroke').max(250, 'A stroke over 250 mm is not plausible.'),
-  conRodMm: positive('Connecting-rod length').max(600),
+  conRodMm: positive('Connecting-rod length', 600),
   compressionRatio: z.number({ error: 'Compression ratio must be a number.' }).finite().gt(1, 'Compression ratio must be above 1.').max(25, 'A compression ratio over 25 is not plausible for a spark-ignition engine.'),
-  idleRpm: positive('Idle speed').max(3000),
-  crankingRpm: positive('Cranking speed').max(1000),
-  redlineRpm: positive('Redline').max(20000),
+  idleRpm: positive('Idle speed', 3000),
+  crankingRpm: positive('Cranking speed', 1000),
+  redlineRpm: positive('Redline', 20000),
   systemVoltageV: systemVoltage,
   earthPolarity,
   charging: z.enum(['dynamo', 'alternator']),
-  pointsDwellDeg: positive('Dwell angle').max(120),
-  pointsGapMm: positive('Points gap').max(1.5),
-  pointsFloatRpm: positive('Points float rpm').max(20000).nullable().optional(),
+  pointsDwellDeg: positive('Dwell angle', 120),
+  pointsGapMm: positive('Points gap', 1.5),
+  pointsFloatRpm: positive('Points float rpm', 20000).nullable().optional(),
   staticTimingDegBtdc: z.number().finite().min(-10, 'Static timing below 10 degrees after TDC is not plausible.').max(40, 'Static timing above 40 degrees BTDC is not plausible.'),
   advanceCurve: z.array(advancePoint).max(40, 'At most 40 rows in the advance curve.'),
   existing: existingSetup,
@@ -137,14 +143,14 @@ const partBase = {
 export const coilFields = z.object({
   kind: z.literal('coil'),
   ...partBase,
-  primaryResistanceOhm20C: positive('Primary resistance').max(20),
+  primaryResistanceOhm20C: positive('Primary resistance', 20),
   primaryInductanceH: positive('Primary inductance').max(0.1, 'A primary inductance over 100 mH is not plausible.'),
-  secondaryResistanceOhm: positive('Secondary resistance').max(50000),
-  turnsRatio: positive('Turns ratio').min(10).max(400).nullable(),
-  secondaryInductanceH: positive('Secondary inductance').max(1000).nullable(),
+  secondaryResistanceOhm: positive('Secondary resistance', 50000),
+  turnsRatio: positive('Turns ratio', 400).min(10, 'A turns ratio below 10 is not plausible for an ignition coil.').nullable(),
+  secondaryInductanceH: positive('Secondary inductance', 1000).nullable(),
   forBallast: z.boolean(),
   ratedVoltageV: systemVoltage,
-  maxDissipationW: positive('Maximum dissipation').max(500).nullable(),
+  maxDissipationW: positive('Maximum dissipation', 500).nullable(),
 });
 export const coil = coilFields.refine((c) => c.turnsRatio !== null || c.secondaryInductanceH !== null, {
   path: ['turnsRatio'],
@@ -155,35 +161,35 @@ export const ballast = z.object({
   kind: z.literal('ballast'),
   ...partBase,
   ballastType: z.enum(['iron-wire', 'ceramic', 'harness-wire']),
-  coldResistanceOhm: positive('Cold resistance').max(10),
-  thermalResistanceKPerW: positive('Thermal resistance').max(200).nullable(),
+  coldResistanceOhm: positive('Cold resistance', 10),
+  thermalResistanceKPerW: positive('Thermal resistance', 200).nullable(),
 });
 
 export const moduleTypes = ['transistor-points', 'breakerless-fixed-duty', 'breakerless-current-limited', 'capacitive-discharge'] as const;
 
 export const cdStage = z.object({
-  capacitorUf: positive('Capacitor').max(10),
-  chargeVoltageV: positive('Charge voltage').max(1000),
-  chargerPowerW: positive('Charger power').max(500),
-  multiSparkBelowRpm: positive('Multi-spark rpm').max(10000).nullable(),
+  capacitorUf: positive('Capacitor', 10),
+  chargeVoltageV: positive('Charge voltage', 1000),
+  chargerPowerW: positive('Charger power', 500),
+  multiSparkBelowRpm: positive('Multi-spark rpm', 10000).nullable(),
 });
 
 export const moduleFields = z.object({
   kind: z.literal('module'),
   ...partBase,
   moduleType: z.enum(moduleTypes),
-  supplyMinV: positive('Minimum supply').max(20),
-  supplyMaxV: positive('Maximum supply').max(30),
+  supplyMinV: positive('Minimum supply', 20),
+  supplyMaxV: positive('Maximum supply', 30),
   earthPolarities: z.array(earthPolarity).min(1, 'Tick at least one earth polarity.'),
-  minCoilResistanceOhm: nonNegative('Minimum coil resistance').max(20),
-  maxCurrentA: positive('Maximum current').max(30),
-  currentLimitA: positive('Current limit').max(30).nullable(),
-  switchSaturationV: nonNegative('Switch saturation voltage').max(5),
-  primaryClampV: positive('Primary clamp voltage').max(1000).nullable(),
+  minCoilResistanceOhm: nonNegative('Minimum coil resistance', 20),
+  maxCurrentA: positive('Maximum current', 30),
+  currentLimitA: positive('Current limit', 30).nullable(),
+  switchSaturationV: nonNegative('Switch saturation voltage', 5),
+  primaryClampV: positive('Primary clamp voltage', 1000).nullable(),
   fixedDutyFraction: z.number().finite().gt(0).lt(1).nullable(),
   maxDutyFraction: z.number().finite().gt(0).lt(1).nullable(),
   stallShutOff: z.boolean(),
-  maxSparkRateHz: positive('Maximum spark rate').max(2000),
+  maxSparkRateHz: positive('Maximum spark rate', 2000),
   tachOutput: z.boolean(),
   needsSuppressedLeads: z.boolean(),
   cd: cdStage.nullable(),
@@ -213,16 +219,16 @@ export const leads = z.object({
   kind: z.literal('leads'),
   ...partBase,
   core: z.enum(['copper', 'carbon', 'spiral']),
-  resistancePerLeadOhm: nonNegative('Lead resistance').max(100000),
+  resistancePerLeadOhm: nonNegative('Lead resistance', 100000),
 });
 
 export const plug = z.object({
   kind: z.literal('plug'),
   ...partBase,
   resistor: z.boolean(),
-  resistorOhm: nonNegative('Resistor').max(20000),
-  gapMinMm: positive('Smallest gap').max(3),
-  gapMaxMm: positive('Largest gap').max(3),
+  resistorOhm: nonNegative('Resistor', 20000),
+  gapMinMm: positive('Smallest gap', 3),
+  gapMaxMm: positive('Largest gap', 3),
 });
 
 export const partInput = z.discriminatedUnion('kind', [coil, ballast, ignitionModule, tach, leads, plug], {
@@ -243,7 +249,7 @@ export const planStatus = z.enum(['draft', 'checked', 'wired', 'done']);
 
 export const planFields = z.object({
   engineId: id,
-  name: z.string().trim().min(1, 'Give the plan a name.').max(120),
+  name: z.string().trim().min(1, 'Give the plan a name.').max(120, 'Keep the name under 120 characters.'),
   notes: text(4000),
   status: planStatus,
   moduleId: id.nullable(),
@@ -256,7 +262,7 @@ export const planFields = z.object({
   tachId: id.nullable(),
   leadsId: id.nullable(),
   plugId: id.nullable(),
-  plugGapMm: positive('Plug gap').max(3),
+  plugGapMm: positive('Plug gap', 3),
 });
 export const planInput = planFields;
 export const plan = planFields.extend({ id, updatedAt: z.string() });
@@ -278,7 +284,7 @@ export const readingInput = z.object({
   planId: id,
   quantity: z.enum(readingQuantities),
   value: z.number({ error: 'The reading must be a number.' }).finite(),
-  unit: z.string().trim().min(1, 'Give the unit.').max(16),
+  unit: z.string().trim().min(1, 'Give the unit.').max(16, 'Keep the unit under 16 characters.'),
   takenOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Write the date as YYYY-MM-DD.'),
   note: text(500),
 });
