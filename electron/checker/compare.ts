@@ -4,6 +4,7 @@
  */
 import { toReport } from './report.js';
 import { analyse, baselineOf, createSession } from './session.js';
+import { createWorkspace } from './sweep.js';
 import { CheckerInputError, type ComparisonInput, type ComparisonReport, type ComparisonRow, type SetupReport } from './types.js';
 
 export const MAX_CANDIDATES = 3;
@@ -18,9 +19,12 @@ export function compareSetups(input: ComparisonInput): ComparisonReport {
   }
   const s = createSession(input.engine, input.conditions, input.options);
   const withGap = !(input.options?.skipGapSuggestion ?? false);
-  const ex = analyse(s, input.existing, null, withGap);
+  // One pair of workspaces for all: each analysis is turned into its report before the next.
+  const ws = createWorkspace(s.grids.sweep.n);
+  const keyWs = createWorkspace(s.grids.key.n);
+  const ex = analyse(s, input.existing, null, withGap, ws, keyWs);
   const existing = toReport(s, ex);
   const base = baselineOf(ex, 'the existing setup');
-  const candidates = input.candidates.map((c) => toReport(s, analyse(s, c, base, withGap)));
+  const candidates = input.candidates.map((c) => toReport(s, analyse(s, c, base, withGap, ws, keyWs)));
   return { conditions: s.conditions, existing, candidates, rows: [existing, ...candidates].map(row) };
 }

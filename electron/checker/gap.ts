@@ -7,30 +7,55 @@ import type { RpmGrid } from './grid.js';
 import { airBreakdownV, paschenBreakdownFromReducedV } from './breakdown.js';
 import type { PlugGapSuggestion, PlugSpec } from './types.js';
 
+/** Available / required at grid point i for a gap of `gapCm` (a gap that needs nothing: 1e6). */
+function ratioAt(grid: RpmGrid, availableV: Float64Array, gapCm: number, paschen: boolean, polarityFactor: number, i: number): number {
+  const x = gapCm * grid.densityFactor[i]!;
+  const req = (paschen ? paschenBreakdownFromReducedV(x) : airBreakdownV(x)) * polarityFactor;
+  return req > 0 ? availableV[i]! / req : 1e6;
+}
+
 /** Smallest available/required ratio over grid points [0, lastIndex] for a gap. */
 export function worstRatioForGap(grid: RpmGrid, availableV: Float64Array, lastIndex: number, gapM: number, paschen: boolean, polarityFactor: number): number {
   const gapCm = gapM * 100;
   let worst = Infinity;
   for (let i = 0; i <= lastIndex; i++) {
-    const x = gapCm * grid.densityFactor[i]!;
-    const req = (paschen ? paschenBreakdownFromReducedV(x) : airBreakdownV(x)) * polarityFactor;
-    const ratio = req > 0 ? availableV[i]! / req : 1e6;
+    const ratio = ratioAt(grid, availableV, gapCm, paschen, polarityFactor, i);
     if (ratio < worst) worst = ratio;
   }
   return Number.isFinite(worst) ? worst : 0;
 }
 
+/**
+ * Whether `worstRatioForGap(...) >= margin`, answered by stopping at the first point that falls
+ * short; `firstIndex` (the rpm where the reserve was worst at the gap set) is tried first, as it
+ * is the likeliest to fall short. Same answer as the full scan, in a fraction of the time.
+ */
+export function gapMeetsMargin(grid: RpmGrid, availableV: Float64Array, lastIndex: number, gapM: number, paschen: boolean, polarityFactor: number, margin: number, firstIndex: number): boolean {
+  if (!(margin > 0)) return worstRatioForGap(grid, availableV, lastIndex, gapM, paschen, polarityFactor) >= margin;
+  const gapCm = gapM * 100;
+  // Any point under the margin puts the worst ratio under it (or makes it non-finite, read as 0).
+  if (firstIndex >= 0 && firstIndex <= lastIndex && ratioAt(grid, availableV, gapCm, paschen, polarityFactor, firstIndex) < margin) return false;
+  let worst = Infinity;
+  for (let i = 0; i <= lastIndex; i++) {
+    const ratio = ratioAt(grid, availableV, gapCm, paschen, polarityFactor, i);
+    if (ratio < margin) return false;
+    if (ratio < worst) worst = ratio;
+  }
+  return Number.isFinite(worst) && worst >= margin;
+}
+
 /** Search range when the plug gives none: 0.3 to 2.0 mm (common practice). */
 export const DEFAULT_GAP_RANGE_M: readonly [number, number] = [0.3e-3, 2.0e-3];
 
-export function suggestGap(grid: RpmGrid, availableV: Float64Array, lastIndex: number, plug: PlugSpec | null, margin: number, paschen: boolean, polarityFactor: number): PlugGapSuggestion {
+/** `worstIndex`: where the reserve is worst at the gap set (a hint that only saves time). */
+export function suggestGap(grid: RpmGrid, availableV: Float64Array, lastIndex: number, plug: PlugSpec | null, margin: number, paschen: boolean, polarityFactor: number, worstIndex = 0): PlugGapSuggestion {
   let lo = DEFAULT_GAP_RANGE_M[0];
   let hi = DEFAULT_GAP_RANGE_M[1];
   if (plug && plug.gapMinM > 0 && plug.gapMaxM >= plug.gapMinM) {
     lo = plug.gapMinM;
     hi = plug.gapMaxM;
   }
-  const meets = (g: number): boolean => worstRatioForGap(grid, availableV, lastIndex, g, paschen, polarityFactor) >= margin;
+  const meets = (g: number): boolean => gapMeetsMargin(grid, availableV, lastIndex, g, paschen, polarityFactor, margin, worstIndex);
   const base = { searchedFromM: lo, searchedToM: hi, marginRatio: margin };
   if (!meets(lo)) return { suggestedGapM: null, ...base };
   if (meets(hi)) return { suggestedGapM: hi, ...base };

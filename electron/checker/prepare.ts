@@ -13,8 +13,9 @@ import { copperResistanceOhm, finalCurrentA } from './primary.js';
 import { effectiveSecondaryCapacitanceF, secondaryRiseTimeS, turnsRatio, voltsPerAmp } from './secondary.js';
 import { ironBallastResistanceOhm, selfHeatedTemperatureK } from './thermal.js';
 import { dwellTimeS, DwellMode, type DwellParams } from './timing.js';
-import type { BreakdownModel, EngineSpec, ResolvedConditions, SetupSpec, SwitchingKind } from './types.js';
+import type { BallastSpec, BreakdownModel, EngineSpec, ResolvedConditions, SetupSpec, SwitchingKind } from './types.js';
 import { sparkRateHz } from './dwell.js';
+import { crankingPath, crankingSupplyOf, supplyUnderPowerLoadV } from './cranking.js';
 
 export interface PreparedCd {
   capacitorF: number;
@@ -90,14 +91,9 @@ function nonNeg(value: number | null | undefined, fallback: number): number {
   return typeof value === 'number' && Number.isFinite(value) && value >= 0 ? value : fallback;
 }
 
-/**
- * Supply a module sees when it is the only load on its feed (a CD charger drawing P): the feed
- * resistance R drops it, V_m = V - R P / V_m, so V_m = (V + sqrt(V^2 - 4 R P)) / 2; when the
- * feed cannot deliver P at all the supply collapses to about V / 2.
- */
-function supplyUnderPowerLoadV(supplyV: number, feedOhm: number, powerW: number): number {
-  const disc = supplyV * supplyV - 4 * feedOhm * powerW;
-  return disc > 0 ? 0.5 * (supplyV + Math.sqrt(disc)) : 0.5 * supplyV;
+/** A ballast's resistance at a temperature: iron wire climbs steeply, ceramic and harness wire hold their value. */
+function ballastAt(b: BallastSpec, coldOhm: number, tK: number): number {
+  return b.ballastType === 'iron-wire' ? ironBallastResistanceOhm(coldOhm, tK) : coldOhm;
 }
 
 export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedConditions, model: BreakdownModel): PreparedSetup {
@@ -126,7 +122,7 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
   const contact = usesPoints ? nonNeg(c.pointsContactResistanceOhm.value, 0.1) : 0;
   const switchDrop = m ? nonNeg(m.switchSaturationV, 0) : 0;
   const runV = nonNeg(c.runningSupplyV.value, 14);
-  const crankV = nonNeg(c.crankingSupplyV.value, 9.6);
+  const crankV = crankingSupplyOf(c);
 
   // Dwell parameters.
   let mode: DwellMode = DwellMode.Cam;
@@ -163,15 +159,15 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
   const b = setup.ballast;
   const bCold = b ? pos(b.coldResistanceOhm.value, 1.5, 'The ballast resistance', issues) : 0;
   const theta = b ? (b.thermalResistanceKPerW ?? c.ballastThermalResistanceKPerW.value) : 0;
-  const bAt = (tK: number): number => (b && b.ballastType === 'iron-wire' ? ironBallastResistanceOhm(bCold, tK) : bCold);
   const baseHot = coilHot + harness + contact;
   const ambientK = kelvin(hotC);
   let bHotK = kelvin(ambientC);
   if (b && kind !== 'magneto') {
     const idleRate = sparkRateHz(engine.idleRpm, engine.cylinders, engine.cycle);
     const period = idleRate > 0 ? 1 / idleRate : 1;
-    const power = (tK: number): number => {
-      const rb = bAt(tK);
+    // (Passed straight to the solver rather than named: the search prepares thousands of setups.)
+    bHotK = selfHeatedTemperatureK(ambientK, Math.max(0, theta), (tK: number): number => {
+      const rb = ballastAt(b, bCold, tK);
       if (kind === 'capacitive-discharge') {
         // The ballast only carries the charger's input current, about P / V.
         const i = (m?.cd?.chargerPowerW ?? 0) / Math.max(1, runV);
@@ -182,16 +178,13 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
       const tau = lp / r;
       const td = dwellTimeS(dwellParams, period, engine.idleRpm, iF, tau);
       return meanSquareCurrentA2(iF, tau, td, period, limitA) * rb;
-    };
-    bHotK = selfHeatedTemperatureK(ambientK, Math.max(0, theta), power);
+    });
   }
-  const bHot = b ? bAt(bHotK) : 0;
-  const withBallastCranking = b !== null && !setup.crankingBypass;
+  const bHot = b ? ballastAt(b, bCold, bHotK) : 0;
   const rRunning = baseHot + bHot;
-  const rCranking = coilCold + harness + contact + (withBallastCranking ? bCold : 0);
   const rCold = coilCold + harness + contact + bCold;
   const iRun = finalCurrentA(runV, switchDrop, rRunning);
-  const iCrank = finalCurrentA(crankV, switchDrop, rCranking);
+  const crank = crankingPath(setup, m, kind, crankV, coilCold, harness, contact, bCold, switchDrop, lp);
 
   // Secondary.
   const condenser = setup.condenserF !== null && setup.condenserF > 0 ? setup.condenserF : 0;
@@ -207,21 +200,13 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
 
   // Module supply: fed from terminal 15 it loses only the harness drop; fed after the ballast it
   // also loses the ballast drop whenever the coil draws current (the worst moment, just before break).
+  // The cranking case is part of the cranking path above.
   let modRun: number | null = null;
-  let modCrank: number | null = null;
   let cd: PreparedCd | null = null;
   if (m) {
     const afterBallast = setup.moduleFeed === 'after-ballast' && b !== null;
     const feedRun = harness + (afterBallast ? bHot : 0);
-    // With a cranking bypass the coil side of the ballast is fed from the starter circuit.
-    const feedCrank = harness + (afterBallast && !setup.crankingBypass ? bCold : 0);
-    if (kind === 'capacitive-discharge' && m.cd) {
-      modRun = supplyUnderPowerLoadV(runV, feedRun, m.cd.chargerPowerW);
-      modCrank = supplyUnderPowerLoadV(crankV, feedCrank, m.cd.chargerPowerW);
-    } else {
-      modRun = Math.max(0, runV - feedRun * iRun);
-      modCrank = Math.max(0, crankV - feedCrank * iCrank);
-    }
+    modRun = kind === 'capacitive-discharge' && m.cd ? supplyUnderPowerLoadV(runV, feedRun, m.cd.chargerPowerW) : Math.max(0, runV - feedRun * iRun);
     if (kind === 'capacitive-discharge') {
       const stage = m.cd;
       const capF = stage ? pos(stage.capacitorF, 1e-6, 'The CD capacitor', issues) : 0;
@@ -262,12 +247,12 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     harnessOhm: harness,
     contactOhm: contact,
     rRunningOhm: rRunning,
-    rCrankingOhm: rCranking,
+    rCrankingOhm: crank.rCrankingOhm,
     rColdOhm: rCold,
     iFinalRunningA: kind === 'magneto' ? 0 : iRun,
-    iFinalCrankingA: kind === 'magneto' ? 0 : iCrank,
+    iFinalCrankingA: crank.iFinalCrankingA,
     tauRunningS: lp / Math.max(1e-6, rRunning),
-    tauCrankingS: lp / Math.max(1e-6, rCranking),
+    tauCrankingS: crank.tauCrankingS,
     primaryInductanceH: lp,
     condenserF: condenser,
     secondaryCapacitanceF: cs,
@@ -286,7 +271,7 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     riseS: secondaryRiseTimeS(ls, cEff),
     polarityFactor: setup.coilWiring === 'reversed' ? REVERSED_POLARITY_FACTOR : 1,
     moduleSupplyRunningV: modRun,
-    moduleSupplyCrankingV: modCrank,
+    moduleSupplyCrankingV: crank.moduleSupplyCrankingV,
     cd,
     magnetoRatedA: setup.magneto ? nonNeg(setup.magneto.ratedCurrentA, 0) : 0,
     magnetoFullRpm: setup.magneto ? nonNeg(setup.magneto.fullOutputRpm, 1) : 1,

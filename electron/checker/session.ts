@@ -9,7 +9,7 @@ import { resolveConditions } from './conditions.js';
 import { createWorkspace, evaluateGrid, requiredInto, type Workspace } from './sweep.js';
 import { suggestGap } from './gap.js';
 import { runRules, worstVerdict } from './rules/index.js';
-import type { Baseline } from './rules/context.js';
+import type { Baseline, RuleContext } from './rules/context.js';
 import type { BreakdownModel, CheckOptions, ConditionInputs, EngineSpec, KeyOnReport, PlugGapSuggestion, ResolvedConditions, RuleResult, SetupSpec, Verdict } from './types.js';
 
 export interface Session {
@@ -21,10 +21,15 @@ export interface Session {
   options: CheckOptions;
   /** Required voltage on the sweep grid, by gap and polarity factor, computed once each. */
   requiredCache: Map<string, Float64Array>;
+  /** The entry asked for last. */
+  lastRequired: { gapM: number; polarityFactor: number; values: Float64Array } | null;
 }
 
 /** Required voltage across the sweep for a gap and polarity factor, shared between setups. */
 export function requiredFor(s: Session, gapM: number, polarityFactor: number): Float64Array {
+  // The search asks for the same gap thousands of times in a row: answer that without a key string.
+  const last = s.lastRequired;
+  if (last && last.gapM === gapM && last.polarityFactor === polarityFactor) return last.values;
   const key = `${gapM}|${polarityFactor}`;
   let a = s.requiredCache.get(key);
   if (!a) {
@@ -33,6 +38,7 @@ export function requiredFor(s: Session, gapM: number, polarityFactor: number): F
     if (s.requiredCache.size > 64) s.requiredCache.clear();
     s.requiredCache.set(key, a);
   }
+  s.lastRequired = { gapM, polarityFactor, values: a };
   return a;
 }
 
@@ -48,6 +54,7 @@ export function createSession(engine: EngineSpec, conditions?: ConditionInputs, 
     margin,
     options: opts,
     requiredCache: new Map(),
+    lastRequired: null,
   };
 }
 
@@ -57,6 +64,8 @@ export interface Analysis {
   ws: Workspace;
   keyWs: Workspace;
   keyOn: KeyOnReport;
+  /** What the rules were given. */
+  ctx: RuleContext;
   rules: RuleResult[];
   verdict: Verdict;
   worstRatio: number;
@@ -66,7 +75,7 @@ export interface Analysis {
 }
 
 /** A usable gap: positive and finite, else 0.7 mm (and the setup-complete rule says so). */
-function gapOf(setup: SetupSpec, prep: PreparedSetup): number {
+export function gapOf(setup: SetupSpec, prep: PreparedSetup): number {
   if (Number.isFinite(setup.plugGapM) && setup.plugGapM > 0) return setup.plugGapM;
   prep.issues.push('The plug gap is missing or not positive; 0.7 mm was assumed.');
   return 0.7e-3;
@@ -82,26 +91,39 @@ export function analyse(s: Session, setup: SetupSpec, baseline: Baseline | null,
   evaluateGrid(prep, sweep, gapM, w, requiredFor(s, gapM, prep.polarityFactor));
   evaluateGrid(prep, s.grids.key, gapM, k);
   const last = s.grids.redlineIndex;
-  let worstRatio = Infinity;
-  let worstIndex = 0;
-  for (let i = 0; i <= last; i++) {
-    const r = w.reserveRatio[i]!;
-    if (r < worstRatio) { worstRatio = r; worstIndex = i; }
-  }
+  const { worstRatio, worstIndex } = worstReserve(w, last);
   let belowMarginIndex = -1;
   for (let i = 1; i < sweep.n; i++) {
     if (sweep.rpm[i]! >= s.engine.idleRpm && w.reserveRatio[i]! < s.margin) { belowMarginIndex = i; break; }
   }
   const keyOn = keyOnReport(prep, s.conditions);
-  const gap = withGap ? suggestGap(sweep, w.availableV, last, setup.plug, s.margin, s.model === 'paschen', prep.polarityFactor) : null;
-  const rules = runRules({
+  const gap = withGap ? suggestGap(sweep, w.availableV, last, setup.plug, s.margin, s.model === 'paschen', prep.polarityFactor, worstIndex) : null;
+  const ctx = ruleContext(s, setup, prep, gapM, w, keyOn, baseline, gap, worstRatio, worstIndex);
+  const rules = runRules(ctx);
+  return { setup, prep, ws: w, keyWs: k, keyOn, ctx, rules, verdict: worstVerdict(rules), worstRatio, worstIndex, belowMarginIndex, gap };
+}
+
+/** Lowest reserve ratio over cranking..`last` and where (Infinity at 0 if no point has a ratio). */
+export function worstReserve(ws: Workspace, last: number): { worstRatio: number; worstIndex: number } {
+  let worstRatio = Infinity;
+  let worstIndex = 0;
+  for (let i = 0; i <= last; i++) {
+    const r = ws.reserveRatio[i]!;
+    if (r < worstRatio) { worstRatio = r; worstIndex = i; }
+  }
+  return { worstRatio, worstIndex };
+}
+
+/** What the rules read, for a setup swept into `ws` with the gap `gapM`. */
+export function ruleContext(s: Session, setup: SetupSpec, prep: PreparedSetup, gapM: number, ws: Workspace, keyOn: KeyOnReport, baseline: Baseline | null, gap: PlugGapSuggestion | null, worstRatio: number, worstIndex: number): RuleContext {
+  return {
     engine: s.engine,
     c: s.conditions,
     setup: gapM === setup.plugGapM ? setup : { ...setup, plugGapM: gapM },
     p: prep,
-    grid: sweep,
-    ws: w,
-    redlineIndex: last,
+    grid: s.grids.sweep,
+    ws,
+    redlineIndex: s.grids.redlineIndex,
     idleIndex: s.grids.idleIndex,
     keyOn,
     margin: s.margin,
@@ -109,8 +131,7 @@ export function analyse(s: Session, setup: SetupSpec, baseline: Baseline | null,
     gap,
     worstRatio,
     worstIndex,
-  });
-  return { setup, prep, ws: w, keyWs: k, keyOn, rules, verdict: worstVerdict(rules), worstRatio, worstIndex, belowMarginIndex, gap };
+  };
 }
 
 /** What a candidate is compared with: the existing setup's energy across the same rpm grid. */

@@ -27,14 +27,19 @@ export const IRON_RESISTIVITY_TABLE: ReadonlyArray<readonly [number, number]> = 
   [1200, 112.0],
 ];
 
+// The same table as two flat columns: the ballast heating solution reads it thousands of times.
+const TABLE_K = Float64Array.from(IRON_RESISTIVITY_TABLE, (row) => row[0]);
+const TABLE_RHO = Float64Array.from(IRON_RESISTIVITY_TABLE, (row) => row[1]);
+
 /** Iron resistivity at a temperature, by linear interpolation (linear extension past the ends). */
 export function ironResistivityMicroOhmCm(temperatureK: number): number {
-  const t = IRON_RESISTIVITY_TABLE;
-  const n = t.length;
+  const n = TABLE_K.length;
   let i = 1;
-  while (i < n - 1 && temperatureK > t[i]![0]) i++;
-  const [t0, r0] = t[i - 1]!;
-  const [t1, r1] = t[i]!;
+  while (i < n - 1 && temperatureK > TABLE_K[i]!) i++;
+  const t0 = TABLE_K[i - 1]!;
+  const r0 = TABLE_RHO[i - 1]!;
+  const t1 = TABLE_K[i]!;
+  const r1 = TABLE_RHO[i]!;
   const r = r0 + ((r1 - r0) * (temperatureK - t0)) / (t1 - t0);
   return Math.max(0.5, r);
 }
@@ -54,14 +59,18 @@ export function ironBallastResistanceOhm(cold20COhm: number, temperatureK: numbe
 export function selfHeatedTemperatureK(ambientK: number, thetaKPerW: number, powerAtW: (temperatureK: number) => number): number {
   let lo = ambientK;
   let hi = ambientK + 1500;
-  const g = (t: number): number => ambientK + thetaKPerW * powerAtW(t) - t;
-  if (!(g(lo) > 0)) return ambientK;
-  if (g(hi) > 0) return hi;
+  if (!(excessK(ambientK, thetaKPerW, powerAtW, lo) > 0)) return ambientK;
+  if (excessK(ambientK, thetaKPerW, powerAtW, hi) > 0) return hi;
   // 40 halvings of 1500 K leave about 1e-9 K.
   for (let k = 0; k < 40; k++) {
     const mid = 0.5 * (lo + hi);
-    if (g(mid) > 0) lo = mid;
+    if (excessK(ambientK, thetaKPerW, powerAtW, mid) > 0) lo = mid;
     else hi = mid;
   }
   return 0.5 * (lo + hi);
+}
+
+/** g(T) = T_amb + theta P(T) - T: positive while the resistor would still heat up from T. */
+function excessK(ambientK: number, thetaKPerW: number, powerAtW: (temperatureK: number) => number, t: number): number {
+  return ambientK + thetaKPerW * powerAtW(t) - t;
 }

@@ -27,6 +27,14 @@ export interface DwellParams {
 }
 
 export function dwellTimeS(p: DwellParams, periodS: number, rpm: number, finalA: number, tauS: number): number {
+  return dwellGivenLimitTimeS(p, periodS, rpm, p.mode === DwellMode.CurrentLimited ? timeToReachS(finalA, tauS, p.limitA) : Infinity);
+}
+
+/**
+ * The same with the time to reach the current limit already known. For one supply case that time
+ * is the same at every rpm (the RL rise does not depend on speed), so the sweep works it out once.
+ */
+export function dwellGivenLimitTimeS(p: DwellParams, periodS: number, rpm: number, timeToLimitS: number): number {
   switch (p.mode) {
     case DwellMode.Cam:
     case DwellMode.Magneto:
@@ -34,7 +42,7 @@ export function dwellTimeS(p: DwellParams, periodS: number, rpm: number, finalA:
     case DwellMode.FixedDuty:
       return p.fixedDuty * periodS;
     case DwellMode.CurrentLimited:
-      return currentLimitedDwellS(timeToReachS(finalA, tauS, p.limitA), p.holdS, periodS, p.maxDuty);
+      return currentLimitedDwellS(timeToLimitS, p.holdS, periodS, p.maxDuty);
     default:
       return 0;
   }

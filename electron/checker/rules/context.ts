@@ -34,6 +34,13 @@ export interface RuleContext {
 
 export type Rule = (ctx: RuleContext) => RuleResult;
 
+/**
+ * Whether a rule's verdict is 'fail', decided without building its figures or sentences. Every
+ * rule has one beside it, on the same limits; the parts-bin search asks it of thousands of
+ * combinations and builds full results only for the few it reports.
+ */
+export type FailTest = (ctx: RuleContext) => boolean;
+
 export function result(id: RuleId, title: string, verdict: Verdict, figures: Figure[], why: string, action: string): RuleResult {
   return { id, title, verdict, figures, why, action };
 }

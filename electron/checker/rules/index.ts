@@ -1,16 +1,17 @@
 /**
  * Every rule the checker reports, in the order the report shows them. To add a rule: write it as a
- * `Rule` in one of these files (or a new one), add its id to `RuleId` in ../types.ts, and list it here.
+ * `Rule` in one of these files (or a new one), add its id to `RuleId` in ../types.ts, and list it here;
+ * write its `FailTest` beside it (true exactly when the rule's verdict is 'fail') and list that too.
  */
-import type { RuleResult, Verdict } from '../types.js';
-import type { Rule, RuleContext } from './context.js';
-import { ballastPlan, coilResistanceFloor, peakCurrent } from './resistance.js';
-import { crankingSupply, earthPolarity, sixVolt } from './supply.js';
-import { coilPolarity } from './polarity.js';
-import { tachRule } from './tach.js';
-import { offTime, plugGap, sparkEnergy, sparkRate, voltageReserve } from './spark.js';
-import { keyOnHeat, moduleHeat } from './heat.js';
-import { condenser, setupComplete, suppressedLeads } from './wiring.js';
+import type { RuleId, RuleResult, Verdict } from '../types.js';
+import type { FailTest, Rule, RuleContext } from './context.js';
+import { ballastPlan, ballastPlanFails, coilResistanceFloor, coilResistanceFloorFails, peakCurrent, peakCurrentFails } from './resistance.js';
+import { crankingSupply, crankingSupplyFails, earthPolarity, earthPolarityFails, sixVolt, sixVoltFails } from './supply.js';
+import { coilPolarity, coilPolarityFails } from './polarity.js';
+import { tachFails, tachRule } from './tach.js';
+import { offTime, offTimeFails, plugGap, plugGapFails, sparkEnergy, sparkEnergyFails, sparkRate, sparkRateFails, voltageReserve, voltageReserveFails } from './spark.js';
+import { keyOnHeat, keyOnHeatFails, moduleHeat, moduleHeatFails } from './heat.js';
+import { condenser, condenserFails, setupComplete, setupCompleteFails, suppressedLeads, suppressedLeadsFails } from './wiring.js';
 
 export const RULES: readonly Rule[] = [
   setupComplete,
@@ -33,6 +34,31 @@ export const RULES: readonly Rule[] = [
   moduleHeat,
 ];
 
+/**
+ * Each rule's fail test, in the same order as RULES (test/checker/search-equivalence.test.ts holds
+ * every test to its rule's verdict). The parts-bin search judges combinations with these alone.
+ */
+export const FAIL_TESTS: ReadonlyArray<readonly [RuleId, FailTest]> = [
+  ['setup-complete', setupCompleteFails],
+  ['earth-polarity', earthPolarityFails],
+  ['coil-resistance-floor', coilResistanceFloorFails],
+  ['peak-current', peakCurrentFails],
+  ['ballast-plan', ballastPlanFails],
+  ['cranking-supply', crankingSupplyFails],
+  ['key-on-heat', keyOnHeatFails],
+  ['six-volt', sixVoltFails],
+  ['voltage-reserve', voltageReserveFails],
+  ['spark-energy', sparkEnergyFails],
+  ['spark-rate', sparkRateFails],
+  ['off-time', offTimeFails],
+  ['plug-gap', plugGapFails],
+  ['coil-polarity', coilPolarityFails],
+  ['condenser', condenserFails],
+  ['suppressed-leads', suppressedLeadsFails],
+  ['tach', tachFails],
+  ['module-heat', moduleHeatFails],
+];
+
 export function runRules(ctx: RuleContext): RuleResult[] {
   return RULES.map((r) => r(ctx));
 }
@@ -45,4 +71,4 @@ export function worstVerdict(results: readonly RuleResult[]): Verdict {
   return w;
 }
 
-export type { RuleContext } from './context.js';
+export type { FailTest, RuleContext } from './context.js';

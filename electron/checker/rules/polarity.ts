@@ -4,7 +4,7 @@
  * literature, from memory). That is set by which coil primary terminal goes to the switch, and so
  * depends on the car's earth polarity.
  */
-import { fig, fmt, result, type Rule } from './context.js';
+import { fig, fmt, result, type FailTest, type Rule } from './context.js';
 
 export const coilPolarity: Rule = (ctx) => {
   const { setup, engine, worstRatio, margin } = ctx;
@@ -21,3 +21,6 @@ export const coilPolarity: Rule = (ctx) => {
   }
   return result(id, title, 'pass', figures, 'Wired for this earth polarity, the plug centre electrode fires negative, which needs the least voltage.', howTo);
 };
+
+/** Wired the wrong way round and short of the margin because of it. */
+export const coilPolarityFails: FailTest = (ctx) => ctx.setup.coilWiring === 'reversed' && ctx.worstRatio < ctx.margin;

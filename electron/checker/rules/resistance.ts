@@ -2,21 +2,30 @@
  * Rules about the primary circuit's resistance and current: the module's coil-resistance floor,
  * peak current against its rating, and what to do with the ballast.
  */
-import { fig, fmt, isModuleKind, maxOver, result, type Rule } from './context.js';
+import { fig, fmt, isModuleKind, maxOver, result, type FailTest, type Rule, type RuleContext } from './context.js';
+
+/** Points break current that fails: they pit fast above about 5 A, and 7 A is well past it (from memory). */
+export const POINTS_FAIL_A = 7;
 
 /**
  * A switching transistor is rated for a minimum load resistance: below it the current at key-on or
  * at low rpm exceeds what the transistor survives. The cold coil is the lowest resistance it meets.
  */
+/** The module's coil-resistance floor, or null where none applies (points, CD, no floor given). */
+function floorOf(ctx: RuleContext): number | null {
+  const m = ctx.setup.module;
+  if (!isModuleKind(ctx) || !m || !(m.minCoilResistanceOhm > 0) || ctx.p.kind === 'capacitive-discharge') return null;
+  return m.minCoilResistanceOhm;
+}
+
 export const coilResistanceFloor: Rule = (ctx) => {
   const { p, setup } = ctx;
   const id = 'coil-resistance-floor';
   const title = 'Coil resistance against the module minimum';
-  const m = setup.module;
-  if (!isModuleKind(ctx) || !m || !(m.minCoilResistanceOhm > 0) || p.kind === 'capacitive-discharge') {
+  const floor = floorOf(ctx);
+  if (floor === null) {
     return result(id, title, 'pass', [fig('coil primary, cold', p.coilColdOhm, 'ohm')], 'Points and capacitive-discharge systems have no coil-resistance floor.', 'Nothing to do.');
   }
-  const floor = m.minCoilResistanceOhm;
   const hasBallast = setup.ballast !== null;
   const runCold = p.coilColdOhm + p.ballastColdOhm;
   const runHot = p.coilHotOhm + p.ballastHotOhm;
@@ -42,6 +51,11 @@ export const coilResistanceFloor: Rule = (ctx) => {
   return result(id, title, 'pass', figures, why, 'Nothing to do: the coil circuit stays above the module minimum hot and cold.');
 };
 
+export const coilResistanceFloorFails: FailTest = (ctx) => {
+  const floor = floorOf(ctx);
+  return floor !== null && ctx.p.coilColdOhm + ctx.p.ballastColdOhm < floor;
+};
+
 /** Peak current at break against the module's (or the points') rating. */
 export const peakCurrent: Rule = (ctx) => {
   const { p, ws, setup, keyOn } = ctx;
@@ -57,7 +71,7 @@ export const peakCurrent: Rule = (ctx) => {
     // Points contacts are generally reckoned good for about 4 to 5 A before they pit fast (from memory).
     const figures = [fig('peak current at break', peak.value, 'A'), fig('at rpm', rpm, 'rpm'), fig('points comfortable limit (from memory)', 5, 'A'), fig('key-on current', keyOn.currentA, 'A')];
     const why = 'Points contacts burn and pit faster the more current they break; above about 5 A they need frequent dressing.';
-    if (peak.value > 7) return result(id, title, 'fail', figures, why, 'Fit the ballast the coil needs, or a higher-resistance coil.');
+    if (peak.value > POINTS_FAIL_A) return result(id, title, 'fail', figures, why, 'Fit the ballast the coil needs, or a higher-resistance coil.');
     if (peak.value > 5) return result(id, title, 'caution', figures, why, 'Expect short points life; a transistor-assisted switch would relieve the contacts.');
     return result(id, title, 'pass', figures, why, 'Nothing to do.');
   }
@@ -73,17 +87,28 @@ export const peakCurrent: Rule = (ctx) => {
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
 
+export const peakCurrentFails: FailTest = (ctx) => {
+  const { p, setup } = ctx;
+  if (p.kind === 'capacitive-discharge' || p.kind === 'magneto') return false;
+  const peak = maxOver(ctx.ws.currentA, 0, ctx.ws.n - 1).value;
+  const m = setup.module;
+  if (!isModuleKind(ctx) || !m) return peak > POINTS_FAIL_A;
+  return Math.max(peak, ctx.keyOn.currentA) > m.maxCurrentA;
+};
+
 /**
  * What to do with the ballast: keep it (a coil built for one, on a module that does not limit
  * current), add or keep a cranking bypass, or remove it (a current-limited or CD module, or a
  * full-voltage coil).
  */
+/** A coil wound for about half the supply: built for a ballast, or a 6 V coil on a 12 V car. */
+const needsBallastOf = ({ setup: { coil }, engine }: RuleContext): boolean => coil.forBallast || (coil.ratedVoltageV === 6 && engine.systemVoltageV === 12);
+
 export const ballastPlan: Rule = (ctx) => {
-  const { p, setup, engine } = ctx;
+  const { p, setup } = ctx;
   const id = 'ballast-plan';
   const title = 'Ballast resistor';
   const b = setup.ballast;
-  const coil = setup.coil;
   const figures = [
     fig('coil primary, cold', p.coilColdOhm, 'ohm'),
     fig('ballast, cold', p.ballastColdOhm, 'ohm'),
@@ -91,7 +116,7 @@ export const ballastPlan: Rule = (ctx) => {
     fig('ballast temperature, running', p.ballastHotK - 273.15, 'degC'),
   ];
   if (p.kind === 'magneto') return result(id, title, 'pass', figures, 'A magneto has no battery feed and no ballast.', 'Nothing to do.');
-  const needsBallast = coil.forBallast || (coil.ratedVoltageV === 6 && engine.systemVoltageV === 12);
+  const needsBallast = needsBallastOf(ctx);
   const why = 'A ballast coil is wound for about half the battery voltage: without its resistor it overheats, with it and no cranking bypass it sparks weakly while the starter pulls the battery down.';
   if (p.kind === 'capacitive-discharge') {
     if (b) return result(id, title, 'caution', figures, 'A capacitive-discharge module wants the full battery voltage; a ballast only starves its charger.', 'Remove the ballast, or bridge it, and feed the module from terminal 15.');
@@ -115,4 +140,11 @@ export const ballastPlan: Rule = (ctx) => {
     return result(id, title, 'caution', figures, 'This coil is made for the full system voltage; a ballast in front of it only weakens the spark.', 'Remove the ballast (or bridge it) for this coil.');
   }
   return result(id, title, 'pass', figures, b ? 'The ballast suits this coil and the cranking bypass restores full voltage while cranking.' : 'No ballast, and this coil does not need one.', b ? 'Keep the ballast and the cranking bypass.' : 'Nothing to do.');
+};
+
+/** Only a coil that needs a ballast and has none fails; magneto, CD and current-limited modules never do. */
+export const ballastPlanFails: FailTest = (ctx) => {
+  const k = ctx.p.kind;
+  if (k === 'magneto' || k === 'capacitive-discharge' || k === 'breakerless-current-limited') return false;
+  return needsBallastOf(ctx) && ctx.setup.ballast === null;
 };

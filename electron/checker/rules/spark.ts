@@ -1,7 +1,7 @@
 /**
  * Rules about the spark itself across rpm: energy, voltage reserve, spark rate, off time, plug gap.
  */
-import { fig, fmt, isModuleKind, minOver, result, type Rule } from './context.js';
+import { fig, fmt, isModuleKind, minOver, result, type FailTest, type Rule, type RuleContext } from './context.js';
 
 /**
  * Floor below which we call a spark too weak to rely on: rich or lean mixtures need several mJ
@@ -42,6 +42,8 @@ export const sparkEnergy: Rule = (ctx) => {
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
 
+export const sparkEnergyFails: FailTest = (ctx) => minOver(ctx.ws.energyJ, ctx.idleIndex, ctx.redlineIndex).value < ENERGY_FLOOR_J;
+
 /** Available against required voltage, with the common-practice margin of 1.25. */
 export const voltageReserve: Rule = (ctx) => {
   const { ws, worstRatio, worstIndex, margin, grid, baseline } = ctx;
@@ -67,12 +69,18 @@ export const voltageReserve: Rule = (ctx) => {
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
 
+/** Below 1 the coil cannot fire the plug at all somewhere between cranking and redline. */
+export const voltageReserveFails: FailTest = (ctx) => ctx.worstRatio < 1;
+
+/** Sparks per second at redline: rpm x cylinders / 120 on a four-stroke, / 60 on a two-stroke. */
+const redlineRateHz = ({ engine }: RuleContext): number => (engine.redlineRpm * engine.cylinders) / (engine.cycle === 'two-stroke' ? 60 : 120);
+
 /** The module's highest spark rate against the rate at redline. */
 export const sparkRate: Rule = (ctx) => {
   const { engine, setup, grid, redlineIndex } = ctx;
   const id = 'spark-rate';
   const title = 'Spark rate at redline';
-  const redlineRate = (engine.redlineRpm * engine.cylinders) / (engine.cycle === 'two-stroke' ? 60 : 120);
+  const redlineRate = redlineRateHz(ctx);
   const figures = [fig('spark rate at redline', redlineRate, 'Hz')];
   const m = setup.module;
   if (!isModuleKind(ctx) || !m) {
@@ -91,11 +99,16 @@ export const sparkRate: Rule = (ctx) => {
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
 
-/** Off time (switch open) against the spark duration: a coil switched on mid-spark cuts it short. */
-export const offTime: Rule = (ctx) => {
-  const { ws, redlineIndex, grid, p } = ctx;
-  const id = 'off-time';
-  const title = 'Time for the spark';
+export const sparkRateFails: FailTest = (ctx) => {
+  const m = ctx.setup.module;
+  return isModuleKind(ctx) && m !== null && redlineRateHz(ctx) > m.maxSparkRateHz;
+};
+
+/** Off time under this fraction of the spark duration cuts most of the spark away (our limit). */
+export const OFF_TIME_FAIL_RATIO = 0.3;
+
+/** Least off time / spark duration from cranking to redline, and where (Infinity if no spark). */
+function leastOffTimeRatio({ ws, redlineIndex }: RuleContext): { worst: number; wi: number } {
   let worst = Infinity;
   let wi = 0;
   for (let i = 0; i <= redlineIndex; i++) {
@@ -105,14 +118,25 @@ export const offTime: Rule = (ctx) => {
       if (r < worst) { worst = r; wi = i; }
     }
   }
+  return { worst, wi };
+}
+
+/** Off time (switch open) against the spark duration: a coil switched on mid-spark cuts it short. */
+export const offTime: Rule = (ctx) => {
+  const { ws, grid, p } = ctx;
+  const id = 'off-time';
+  const title = 'Time for the spark';
+  const { worst, wi } = leastOffTimeRatio(ctx);
   if (!Number.isFinite(worst)) return result(id, title, 'pass', [], 'No spark duration to compare.', 'Nothing to do.');
   const figures = [fig('least off time / spark duration', worst, ''), fig('at rpm', grid.rpm[wi]!, 'rpm'), fig('off time there', ws.offS[wi]! * 1000, 'ms'), fig('spark duration there', ws.durationS[wi]! * 1000, 'ms')];
   const why = 'The coil can only be switched on again once the spark has burnt out; closing earlier cuts the spark short and wastes its energy.';
   if (p.kind === 'capacitive-discharge') return result(id, title, 'pass', figures, 'A CD spark is short and the coil is not charged between sparks.', 'Nothing to do.');
-  if (worst < 0.3) return result(id, title, 'fail', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before a third of the spark has burnt.`, 'Choose a module with a lower maximum duty, or a coil with a shorter spark.');
+  if (worst < OFF_TIME_FAIL_RATIO) return result(id, title, 'fail', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before a third of the spark has burnt.`, 'Choose a module with a lower maximum duty, or a coil with a shorter spark.');
   if (worst < 1) return result(id, title, 'caution', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before the spark ends.`, 'Usually harmless near redline; a lower maximum duty would cure it.');
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
+
+export const offTimeFails: FailTest = (ctx) => ctx.p.kind !== 'capacitive-discharge' && leastOffTimeRatio(ctx).worst < OFF_TIME_FAIL_RATIO;
 
 /** The current gap against the suggested one and the plug's recommended range. */
 export const plugGap: Rule = (ctx) => {
@@ -137,3 +161,6 @@ export const plugGap: Rule = (ctx) => {
   }
   return result(id, title, 'pass', figures, why, `The gap set keeps the margin; up to ${fmt(gap.suggestedGapM * 1000, 2)} mm would too.`);
 };
+
+/** The plug-gap rule advises only; it never fails. */
+export const plugGapFails: FailTest = () => false;

@@ -1,7 +1,7 @@
 /**
  * Rules about the supply: what the module sees while cranking, earth polarity, 6 V systems.
  */
-import { fig, fmt, isModuleKind, result, type Rule } from './context.js';
+import { fig, fmt, isModuleKind, result, type FailTest, type Rule } from './context.js';
 
 /** The module's own supply while the starter pulls the battery down, against its minimum. */
 export const crankingSupply: Rule = (ctx) => {
@@ -28,6 +28,12 @@ export const crankingSupply: Rule = (ctx) => {
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
 
+export const crankingSupplyFails: FailTest = (ctx) => {
+  const m = ctx.setup.module;
+  const v = ctx.p.moduleSupplyCrankingV;
+  return isModuleKind(ctx) && m !== null && v !== null && v < m.supplyMinV;
+};
+
 /** A module built for negative earth will not work (or will be destroyed) on a positive-earth car. */
 export const earthPolarity: Rule = (ctx) => {
   const { setup, engine } = ctx;
@@ -39,6 +45,11 @@ export const earthPolarity: Rule = (ctx) => {
   const why = 'Transistors conduct one way only: a module made for the other earth polarity does not switch, and can be destroyed the moment it is connected.';
   if (!ok) return result(id, title, 'fail', [], `${why} This car is ${engine.earthPolarity} earth and the module supports ${m.earthPolarities.join(' and ')} earth only.`, 'Choose a module for this earth polarity, or convert the car\'s polarity first (with everything else that depends on it).');
   return result(id, title, 'pass', [], `${why} The module supports ${engine.earthPolarity} earth.`, 'Nothing to do.');
+};
+
+export const earthPolarityFails: FailTest = (ctx) => {
+  const m = ctx.setup.module;
+  return isModuleKind(ctx) && m !== null && !m.earthPolarities.includes(ctx.engine.earthPolarity);
 };
 
 /** 6 V systems: module minimum supply and coil rating. */
@@ -63,4 +74,11 @@ export const sixVolt: Rule = (ctx) => {
     return result(id, title, 'caution', figures, 'A 6 V coil on 12 V carries about twice its design current unless something limits it.', 'Fit a ballast or a current-limited module, or choose a 12 V coil.');
   }
   return result(id, title, 'pass', figures, 'A 12 V system: no 6 V limits apply.', 'Nothing to do.');
+};
+
+/** Only a module that needs more than a 6 V system gives fails. */
+export const sixVoltFails: FailTest = (ctx) => {
+  if (ctx.p.kind === 'magneto' || ctx.engine.systemVoltageV !== 6 || !isModuleKind(ctx)) return false;
+  const m = ctx.setup.module;
+  return m !== null && m.supplyMinV > ctx.p.runningSupplyV;
 };

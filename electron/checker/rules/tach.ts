@@ -8,7 +8,11 @@
  * Pulses per revolution are cylinders / 2 on a four-stroke. A multi-spark module gives several
  * pulses per firing below its multi-spark rpm, so a pulse-counting tach over-reads there.
  */
-import { fig, fmt, result, type Rule } from './context.js';
+import { fig, fmt, result, type FailTest, type Rule, type RuleContext } from './context.js';
+
+/** Which column of the table above the setup falls in. */
+const systemClass = ({ p }: RuleContext): 'cd' | 'points' | 'inductive' =>
+  p.kind === 'capacitive-discharge' ? 'cd' : p.kind === 'points' || p.kind === 'magneto' ? 'points' : 'inductive';
 
 export const tachRule: Rule = (ctx) => {
   const { setup, engine, p } = ctx;
@@ -19,7 +23,7 @@ export const tachRule: Rule = (ctx) => {
   const figures = [fig('pulses per revolution', pulsesPerRev, '')];
   if (!t) return result(id, title, 'pass', figures, 'No tachometer is recorded for this engine.', 'Nothing to do.');
   const m = setup.module;
-  const cls = p.kind === 'capacitive-discharge' ? 'cd' : p.kind === 'points' || p.kind === 'magneto' ? 'points' : 'inductive';
+  const cls = systemClass(ctx);
   const tachOut = m?.tachOutput === true;
   const multiBelow = p.cd?.multiSparkBelowRpm ?? null;
   const why = 'A tachometer reads the ignition\'s pulses; a system that changes the pulses can leave it dead, erratic or reading double.';
@@ -40,4 +44,15 @@ export const tachRule: Rule = (ctx) => {
     return result(id, title, 'caution', figures, 'A current-sensing tachometer usually works with an inductive module, but a module that changes dwell with speed can make it read unsteadily.', 'Check the reading against a hand-held tachometer after the conversion.');
   }
   return result(id, title, 'pass', figures, why, 'Nothing to do: this tachometer reads this system.');
+};
+
+/** The table's "needs an adaptor" and "n/a" cells: a tach that reads nothing or is not built for the pulses. */
+export const tachFails: FailTest = (ctx) => {
+  const t = ctx.setup.tach;
+  if (!t || t.senses === 'cable') return false;
+  const cls = systemClass(ctx);
+  const tachOut = ctx.setup.module?.tachOutput === true;
+  if (t.senses === 'module-output') return cls === 'points' || !tachOut;
+  if (cls === 'cd') return t.senses === 'coil-supply-current' || !tachOut;
+  return false;
 };

@@ -1,7 +1,8 @@
 /**
  * Wiring rules: the condenser, suppressed leads, and whether the setup is complete at all.
  */
-import { fig, isModuleKind, result, type Rule } from './context.js';
+import type { LeadsSpec } from '../types.js';
+import { fig, isModuleKind, result, type FailTest, type Rule } from './context.js';
 
 export const condenser: Rule = (ctx) => {
   const { setup, p } = ctx;
@@ -23,6 +24,13 @@ export const condenser: Rule = (ctx) => {
   return result(id, title, 'pass', figures, why, 'Make sure the old condenser is disconnected from the coil negative.');
 };
 
+/** Points without a condenser, or a condenser left across a CD coil primary. */
+export const condenserFails: FailTest = ({ p, setup }) =>
+  p.kind === 'points' || p.kind === 'magneto' ? setup.condenserF === null : setup.condenserF !== null && p.kind === 'capacitive-discharge';
+
+/** Resistive or spiral core, or at least 1 kohm a lead (common practice). */
+const isSuppressed = (leads: LeadsSpec): boolean => leads.core !== 'copper' || leads.resistancePerLeadOhm >= 1000;
+
 export const suppressedLeads: Rule = (ctx) => {
   const { setup } = ctx;
   const id = 'suppressed-leads';
@@ -34,9 +42,16 @@ export const suppressedLeads: Rule = (ctx) => {
   if (!isModuleKind(ctx) || !m || !m.needsSuppressedLeads) return result(id, title, 'pass', figures, 'The module does not call for suppressed leads.', 'Nothing to do.');
   const why = 'Spark interference can trigger the module falsely or damage it; this module needs suppressed (resistive or spiral) leads or resistor plugs.';
   if (!leads) return result(id, title, plugR ? 'pass' : 'caution', figures, why, plugR ? 'Resistor plugs are fitted; that is enough.' : 'Record the leads fitted; use suppressed leads or resistor plugs.');
-  const suppressed = leads.core !== 'copper' || leads.resistancePerLeadOhm >= 1000;
-  if (!suppressed && !plugR) return result(id, title, 'fail', figures, why, 'Fit suppressed leads or resistor plugs before running the engine with this module.');
+  if (!isSuppressed(leads) && !plugR) return result(id, title, 'fail', figures, why, 'Fit suppressed leads or resistor plugs before running the engine with this module.');
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
+};
+
+/** A module that needs suppression, plain copper leads recorded and no resistor plugs. */
+export const suppressedLeadsFails: FailTest = (ctx) => {
+  const { setup } = ctx;
+  const m = setup.module;
+  if (!isModuleKind(ctx) || !m || !m.needsSuppressedLeads || !setup.leads) return false;
+  return !isSuppressed(setup.leads) && setup.plug?.resistor !== true;
 };
 
 export const setupComplete: Rule = (ctx) => {
@@ -44,3 +59,5 @@ export const setupComplete: Rule = (ctx) => {
   if (p.issues.length === 0) return result('setup-complete', 'Setup complete', 'pass', [], 'Every part the setup needs is described.', 'Nothing to do.');
   return result('setup-complete', 'Setup complete', 'fail', [], `The setup cannot be checked properly: ${p.issues.join(' ')}`, 'Complete the missing part details; the figures below use the stated assumptions.');
 };
+
+export const setupCompleteFails: FailTest = (ctx) => ctx.p.issues.length !== 0;
