@@ -33,6 +33,8 @@ const bridge = {
   'readings.list': call('readings.list'),
   'readings.add': call('readings.add'),
   'readings.delete': call('readings.delete'),
+  'check.plans': call('check.plans'),
+  'check.search': call('check.search'),
 } satisfies BridgeApi;
 
 contextBridge.exposeInMainWorld(bridgeGlobalName, Object.freeze(bridge));

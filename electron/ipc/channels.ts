@@ -6,6 +6,9 @@
  */
 import { z } from 'zod';
 import { engine, engineInput, part, partInput, partKind, plan, planInput, reading, readingInput } from '../../db/schema.js';
+import { checkPlansRequest, checkSearchRequest, comparisonAnswer, searchAnswer } from './check-shapes.js';
+
+export * from './check-shapes.js';
 
 const id = z.number().int().positive();
 const byId = z.object({ id });
@@ -52,6 +55,10 @@ export const channels = {
   'readings.list': { request: z.object({ planId: id }), response: z.array(reading) },
   'readings.add': { request: z.object({ reading: readingInput }), response: reading },
   'readings.delete': { request: byId, response: z.object({ deleted: z.literal(true) }) },
+  /** The engine's existing setup beside up to three of its plans, judged rule by rule. */
+  'check.plans': { request: checkPlansRequest, response: comparisonAnswer },
+  /** The best combinations of module, coil and ballast from the whole parts bin for one engine. */
+  'check.search': { request: checkSearchRequest, response: searchAnswer },
 } as const;
 
 export type Channels = typeof channels;

@@ -8,6 +8,7 @@ import { loadDemo } from '../../db/demo/index.js';
 import { StoreError } from '../../db/errors.js';
 import { SCHEMA_VERSION } from '../../db/open.js';
 import { createRepositories, type Repositories } from '../../db/repositories/index.js';
+import { checkPlans, searchShelf } from './check-handlers.js';
 import type { Handlers } from './dispatch.js';
 import { AppFailure } from './failure.js';
 
@@ -44,6 +45,9 @@ export function handlersFor(repos: Repositories, info: HostInfo): Handlers {
     'readings.list': guard(undefined, (r) => repos.readings.list(r.planId)),
     'readings.add': guard('reading', (r) => repos.readings.add(r.reading)),
     'readings.delete': guard(undefined, (r) => repos.readings.delete(r.id)),
+
+    'check.plans': guard(undefined, (r) => checkPlans(repos, r)),
+    'check.search': guard(undefined, (r) => searchShelf(repos, r)),
   };
 }
 

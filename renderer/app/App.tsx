@@ -7,6 +7,8 @@ import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } fro
 import type { ResponseOf } from '../../electron/ipc/channels.js';
 import { EngineEditor } from '../screens/engines/EngineEditor.js';
 import { EngineList } from '../screens/engines/EngineList.js';
+import { PartsScreen } from '../screens/parts/PartsScreen.js';
+import { WeighScreen } from '../screens/weigh/WeighScreen.js';
 import { call } from './bridge.js';
 import { loadCurrentEngine, saveCurrentEngine, type CurrentEngine } from './current-engine.js';
 import { DemoLoader } from './DemoLoader.js';
@@ -102,10 +104,10 @@ export function App(): ReactNode {
       );
       break;
     case 'parts':
-      screen = <LaterScreen title="Parts on the shelf" what={laterText.parts} />;
+      screen = <PartsScreen route={route} navigate={navigate} leave={go} version={listVersion} onDeleted={(name) => setFlash({ kind: 'done', text: `${name} was deleted.` })} />;
       break;
     case 'combination':
-      screen = <LaterScreen title="Weigh a combination" what={laterText.combination} />;
+      screen = <WeighScreen current={current} onEngineChosen={setCurrent} navigate={navigate} />;
       break;
     case 'sheet':
       screen = <LaterScreen title="Wiring sheet" what={laterText.sheet} />;

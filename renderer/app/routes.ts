@@ -1,9 +1,11 @@
+import type { PartKind } from '../../db/schema.js';
+
 /** Where the person is in the app. Kept in memory: the address bar carries only the access key. */
 export type Route =
   | { to: 'engines' }
   | { to: 'engine'; id: number }
   | { to: 'new-engine' }
-  | { to: 'parts' }
+  | { to: 'parts'; part?: { id: number } | { newKind: PartKind } }
   | { to: 'combination' }
   | { to: 'sheet' };
 

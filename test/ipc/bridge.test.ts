@@ -70,6 +70,8 @@ const malformed: Record<ChannelName, { payload: unknown; field: string }> = {
   'readings.list': { payload: { planId: '1' }, field: 'planId' },
   'readings.add': { payload: { reading: { ...readingIn(1), value: 'NaN' } }, field: 'reading.value' },
   'readings.delete': { payload: { id: -3 }, field: 'id' },
+  'check.plans': { payload: { engineId: 1, planIds: [1, 2, 3, 4] }, field: 'planIds' },
+  'check.search': { payload: { engineId: 1, top: 11 }, field: 'top' },
 };
 
 describe('malformed requests', () => {

@@ -87,8 +87,9 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
 
   const del = useDeleteEngine(
     (deletedId) => {
-      onDeleted(deletedId);
+      // Leave first: moving to another screen clears the message line, and the deletion must be said.
       leave({ to: 'engines' });
+      onDeleted(deletedId);
     },
     (message) => setStatus({ kind: 'problem', text: message }),
   );

@@ -1,0 +1,137 @@
+/**
+ * What the "weigh a combination" screen receives: the checker's reports trimmed to what a person
+ * reads, in display units (mJ, kV, mm), every number finite. These schemas import only zod, so the
+ * renderer may use them through channels.ts; the dispatcher checks every answer against them.
+ */
+import { z } from 'zod';
+
+const id = z.number().int().positive();
+const finite = z.number().finite();
+
+export const verdictValue = z.enum(['pass', 'caution', 'fail']);
+
+/** A figure behind a rule or an input: `measured` when it came from the person's own meter. */
+export const shownFigure = z.object({
+  name: z.string(),
+  value: finite,
+  unit: z.string(),
+  measured: z.boolean(),
+  /** Where an input came from ("catalogue", "default (from memory)", ...); null for computed figures. */
+  source: z.string().nullable(),
+});
+
+export const shownRule = z.object({
+  id: z.string(),
+  title: z.string(),
+  verdict: verdictValue,
+  figures: z.array(shownFigure),
+  why: z.string(),
+  action: z.string(),
+});
+
+/** One operating point in display units. */
+export const shownPoint = z.object({
+  rpm: finite,
+  supplyV: finite,
+  currentA: finite,
+  dwellMs: finite,
+  energyMj: finite,
+  availableKv: finite,
+  requiredKv: finite,
+  reserveRatio: finite,
+});
+
+/**
+ * The sweep for charts, downsampled; equal-length columns over the same rpm. The first
+ * `crankingCount` points are on the cranking supply (a chart shows them apart from the running line).
+ */
+export const shownSeries = z.object({
+  rpm: z.array(finite),
+  energyMj: z.array(finite),
+  availableKv: z.array(finite),
+  requiredKv: z.array(finite),
+  crankingCount: z.number().int().min(0),
+});
+
+export const shownSetup = z.object({
+  kind: z.enum(['existing', 'plan', 'suggestion']),
+  /** The stored plan this setup is, when it is one. */
+  planId: id.nullable(),
+  name: z.string(),
+  verdict: verdictValue,
+  counts: z.object({ pass: z.number().int().min(0), caution: z.number().int().min(0), fail: z.number().int().min(0) }),
+  rules: z.array(shownRule),
+  keyPoints: z.object({ cranking: shownPoint, idle: shownPoint, mid: shownPoint, redline: shownPoint }),
+  /** Lowest running rpm where available / required falls below the margin; null if it never does. */
+  belowMarginFromRpm: finite.nullable(),
+  worstReserveRatio: finite,
+  worstReserveRpm: finite,
+  plugGapMm: finite,
+  /** Largest gap that keeps the margin at the worst rpm; null when none does (or it was not searched). */
+  suggestedGapMm: finite.nullable(),
+  /** Values taken from the person's readings, which won over the catalogue. */
+  measured: z.array(shownFigure),
+  series: shownSeries,
+});
+
+export const shownCaution = z.object({ id: z.string(), text: z.string() });
+
+export const comparisonAnswer = z.object({
+  engineId: id,
+  engineName: z.string(),
+  marginRatio: finite,
+  /** The conditions every setup was computed under, with where each came from. */
+  conditions: z.array(shownFigure),
+  existing: shownSetup,
+  candidates: z.array(shownSetup).max(3),
+  cautions: z.array(shownCaution).min(1),
+});
+
+export const shelfSuggestion = z.object({
+  rank: z.number().int().min(1),
+  moduleId: id,
+  moduleName: z.string(),
+  coilId: id,
+  coilName: z.string(),
+  ballastId: id.nullable(),
+  ballastName: z.string().nullable(),
+  crankingBypass: z.boolean(),
+  /** A plan name of at most 120 characters, for "make this a plan". */
+  planName: z.string().min(1).max(120),
+  setup: shownSetup,
+});
+
+export const searchAnswer = z.object({
+  engineId: id,
+  engineName: z.string(),
+  marginRatio: finite,
+  evaluated: z.number().int().min(0),
+  withoutFail: z.number().int().min(0),
+  suggestions: z.array(shelfSuggestion),
+  /** How many combinations each rule failed (one combination can count under several). */
+  rejectedByRule: z.array(z.object({ id: z.string(), title: z.string(), count: z.number().int().min(0) })),
+  cautions: z.array(shownCaution).min(1),
+});
+
+export const checkPlansRequest = z.object({
+  engineId: id,
+  planIds: z
+    .array(id)
+    .max(3, 'Compare at most three plans with the existing setup at once.')
+    .refine((ids) => new Set(ids).size === ids.length, 'Each plan can be ticked only once.'),
+});
+
+export const checkSearchRequest = z.object({
+  engineId: id,
+  top: z.number().int('Ask for a whole number of suggestions.').min(1, 'Ask for at least one suggestion.').max(10, 'Ask for at most ten suggestions.').optional(),
+});
+
+export type ShownFigure = z.infer<typeof shownFigure>;
+export type ShownRule = z.infer<typeof shownRule>;
+export type ShownPoint = z.infer<typeof shownPoint>;
+export type ShownSeries = z.infer<typeof shownSeries>;
+export type ShownSetup = z.infer<typeof shownSetup>;
+export type ComparisonAnswer = z.infer<typeof comparisonAnswer>;
+export type SearchAnswer = z.infer<typeof searchAnswer>;
+export type ShelfSuggestion = z.infer<typeof shelfSuggestion>;
+export type VerdictValue = z.infer<typeof verdictValue>;

@@ -1,0 +1,72 @@
+/**
+ * Deleting a part, asking first. A part that a plan or an engine's fitted ignition still names is
+ * refused by the store (IN_USE) with a sentence saying who uses it; that sentence is shown in a
+ * second dialog, and nothing is removed.
+ */
+import { useState, type ReactNode } from 'react';
+import { call } from '../../app/bridge.js';
+import { Confirm, Dialog } from '../../app/Dialog.js';
+
+type Target = { id: number; name: string };
+type Stage = { step: 'ask' } | { step: 'refused'; message: string; inUse: boolean } | { step: 'closed' };
+
+export function useDeletePart(onDone: (target: Target) => void) {
+  const [target, setTarget] = useState<Target | null>(null);
+  const [stage, setStage] = useState<Stage>({ step: 'closed' });
+  const [busy, setBusy] = useState(false);
+
+  const close = (): void => {
+    setStage({ step: 'closed' });
+    setTarget(null);
+  };
+
+  const send = async (): Promise<void> => {
+    if (!target) return;
+    setBusy(true);
+    const r = await call('parts.delete', { id: target.id });
+    setBusy(false);
+    if (r.ok) {
+      close();
+      return onDone(target);
+    }
+    setStage({ step: 'refused', message: r.error.message, inUse: r.error.code === 'IN_USE' });
+  };
+
+  const dialog: ReactNode =
+    target && stage.step === 'ask' ? (
+      <Confirm
+        title={`Delete ${target.name}?`}
+        confirmLabel="Delete the part"
+        cancelLabel="Keep it"
+        danger
+        busy={busy}
+        onConfirm={() => void send()}
+        onCancel={close}
+        testId="delete-part-dialog"
+      >
+        <p>The part is taken off the shelf in this workshop. This cannot be undone.</p>
+      </Confirm>
+    ) : target && stage.step === 'refused' ? (
+      <Dialog
+        title={stage.inUse ? `${target.name} is still in use` : `${target.name} was not deleted`}
+        onCancel={close}
+        testId="delete-part-refused"
+        actions={
+          <button type="button" data-autofocus onClick={close}>
+            Close
+          </button>
+        }
+      >
+        <p data-testid="delete-part-refusal">{stage.message}</p>
+        <p>Nothing was deleted; the part is still on the shelf.</p>
+      </Dialog>
+    ) : null;
+
+  return {
+    ask: (part: Target) => {
+      setTarget(part);
+      setStage({ step: 'ask' });
+    },
+    dialog,
+  };
+}

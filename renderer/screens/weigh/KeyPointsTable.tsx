@@ -1,0 +1,64 @@
+/** The four speeds a restorer asks about (cranking, idle, mid-range, redline), setups side by side. */
+import type { ReactNode } from 'react';
+import type { ShownPoint, ShownSetup } from '../../../electron/ipc/channels.js';
+import { number, ratioText, rpmText } from './words.js';
+
+const speeds = [
+  { key: 'cranking', label: 'Cranking' },
+  { key: 'idle', label: 'Idle' },
+  { key: 'mid', label: 'Mid-range' },
+  { key: 'redline', label: 'Redline' },
+] as const;
+
+const rows: Array<{ label: string; text: (p: ShownPoint) => string }> = [
+  { label: 'Energy stored per spark', text: (p) => `${number(p.energyMj, 1)} mJ` },
+  { label: 'Voltage available', text: (p) => `${number(p.availableKv, 1)} kV` },
+  { label: 'Voltage the plug needs', text: (p) => `${number(p.requiredKv, 1)} kV` },
+  { label: 'Reserve (available ÷ needed)', text: (p) => ratioText(p.reserveRatio) },
+  // A capacitive-discharge unit does not charge the coil with current, so there is nothing to show.
+  { label: 'Coil current when it fires', text: (p) => (p.currentA > 0 ? `${number(p.currentA, 2)} A` : '— (none: capacitor)') },
+];
+
+export function KeyPointsTable({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
+  const first = setups[0];
+  if (!first) return null;
+  return (
+    <table className="list keypoints" aria-label="Figures at cranking, idle, mid-range and redline" data-testid="key-points">
+      <thead>
+        <tr>
+          <th scope="col">At this speed</th>
+          {setups.map((s, i) => (
+            <th scope="col" key={i} className="num">
+              {s.kind === 'existing' ? 'Fitted now' : s.name}
+            </th>
+          ))}
+        </tr>
+      </thead>
+      {speeds.map((sp) => (
+        <tbody key={sp.key}>
+          <tr className="speed-row">
+            <th scope="rowgroup" colSpan={setups.length + 1}>
+              {sp.label}, {rpmText(first.keyPoints[sp.key].rpm)}
+              {sp.key === 'cranking' ? ' (on the cranking supply)' : ''}
+            </th>
+          </tr>
+          {rows.map((r) => (
+            <tr key={r.label}>
+              <th scope="row">{r.label}</th>
+              {setups.map((s, i) => {
+                const p = s.keyPoints[sp.key];
+                const short = r.label.startsWith('Reserve') && p.reserveRatio < margin;
+                return (
+                  <td key={i} className={`num${short ? ' short' : ''}`}>
+                    {r.text(p)}
+                    {short ? <span className="short-tag"> (below {number(margin, 2)})</span> : null}
+                  </td>
+                );
+              })}
+            </tr>
+          ))}
+        </tbody>
+      ))}
+    </table>
+  );
+}

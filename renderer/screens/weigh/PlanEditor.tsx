@@ -1,0 +1,216 @@
+/**
+ * Making or changing one plan: which module, coil and ballast, how they are wired, and what else
+ * changes. What the person types stays until it is saved; the store's messages appear beside the
+ * fields; Enter saves. Anything the plan leaves as "keep" stays as the engine has it today.
+ */
+import { useContext, useEffect, useMemo, useRef, useState, type FormEvent, type ReactNode } from 'react';
+import type { Engine, Part, PartKind, Plan, PlanStatus } from '../../../db/schema.js';
+import { call } from '../../app/bridge.js';
+import { Notice } from '../../app/Notice.js';
+import { unitLabel, useGapUnit } from '../../app/units.js';
+import { CheckField, FieldErrorsContext, fieldId, NotesField, SelectField, TextField, type FieldErrors } from '../engines/fields.js';
+import { formToPlanInput, gapFromText, planFingerprint, regap, serverFieldsToPlanForm, type PlanForm } from './plan-form.js';
+import { feedChoices } from './words.js';
+
+type Props = {
+  engine: Engine;
+  parts: Record<PartKind, Part[]>;
+  initial: PlanForm;
+  /** Null for a new plan. */
+  planId: number | null;
+  status: PlanStatus;
+  /** True when the starting values are not saved anywhere yet (a shelf suggestion), so leaving asks first. */
+  startsDirty?: boolean;
+  onSaved: (plan: Plan, created: boolean) => void;
+  onClose: () => void;
+  onDirty: (dirty: boolean, name: string) => void;
+};
+
+const nameOf = (parts: readonly Part[], id: number | null): string | null => (id === null ? null : (parts.find((p) => p.id === id)?.name ?? `part no. ${id}`));
+
+function choicesOf(parts: readonly Part[], none: string, value: string): Array<{ value: string; label: string }> {
+  const out = [{ value: '', label: none }, ...parts.map((p) => ({ value: String(p.id), label: p.name }))];
+  if (value !== '' && !parts.some((p) => String(p.id) === value)) out.push({ value, label: `Part no. ${value} (not on the shelf)` });
+  return out;
+}
+
+export function PlanEditor({ engine, parts, initial, planId, status, startsDirty = false, onSaved, onClose, onDirty }: Props): ReactNode {
+  const [unit] = useGapUnit();
+  const [form, setForm] = useState<PlanForm>(initial);
+  const [savedPrint, setSavedPrint] = useState(() => (startsDirty ? '' : planFingerprint(initial)));
+  const [touched, setTouched] = useState<Set<string>>(() => new Set());
+  const [submitted, setSubmitted] = useState(false);
+  const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
+  const [problem, setProblem] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
+  const headingRef = useRef<HTMLHeadingElement>(null);
+
+  useEffect(() => {
+    setForm((f) => ({ ...f, plugGap: regap(f.plugGap, unit) }));
+  }, [unit]);
+
+  const dirty = planFingerprint(form) !== savedPrint;
+  useEffect(() => onDirty(dirty, form.name.trim() || initial.name.trim()), [dirty, form.name]);
+  useEffect(() => () => onDirty(false, ''), []);
+
+  const check = useMemo(() => formToPlanInput(form, engine.id, status), [form, engine.id, status]);
+  const clientErrors = check.ok ? {} : check.errors;
+  const errorsCtx = useMemo<FieldErrors>(
+    () => ({
+      message: (path) => ((submitted || touched.has(path)) && clientErrors[path]) || serverErrors[path],
+      touch: (path) => setTouched((t) => (t.has(path) ? t : new Set(t).add(path))),
+    }),
+    [clientErrors, serverErrors, submitted, touched],
+  );
+
+  const set = (patch: Partial<PlanForm>): void => setForm((f) => ({ ...f, ...patch }));
+  const text = (key: 'name' | 'notes' | 'moduleId' | 'coilId' | 'tachId' | 'leadsId' | 'plugId') => (v: string) => set({ [key]: v } as Partial<PlanForm>);
+
+  const focusFirst = (errors: Record<string, string>): void => {
+    requestAnimationFrame(() => {
+      // In the order the fields appear, so focus lands on the first one a person would read.
+      const order = ['name', 'moduleId', 'coilId', 'ballastId', 'crankingBypass', 'moduleFeed', 'tachId', 'leadsId', 'plugId', 'plugGapMm', 'notes'];
+      const paths = Object.keys(errors).sort((a, b) => (order.indexOf(a) + 1 || 99) - (order.indexOf(b) + 1 || 99));
+      for (const path of paths) {
+        const el = document.getElementById(fieldId(path)) ?? document.querySelector<HTMLElement>(`[name="${path}"]`);
+        if (el) {
+          el.focus({ preventScroll: true });
+          return el.scrollIntoView({ block: 'center' });
+        }
+      }
+      headingRef.current?.focus();
+    });
+  };
+
+  const save = async (e?: FormEvent): Promise<void> => {
+    e?.preventDefault();
+    if (saving) return;
+    setSubmitted(true);
+    setServerErrors({});
+    if (!check.ok) {
+      setProblem('Some values need correcting before this plan can be saved. Nothing has been saved yet.');
+      return focusFirst(check.errors);
+    }
+    setSaving(true);
+    const r = planId === null ? await call('plans.create', { plan: check.input }) : await call('plans.update', { id: planId, plan: check.input });
+    setSaving(false);
+    if (!r.ok) {
+      const fields = serverFieldsToPlanForm(r.error.fields);
+      setServerErrors(fields);
+      setProblem(`Not saved: ${r.error.message} Everything you typed is still here.`);
+      return focusFirst(fields);
+    }
+    setProblem(null);
+    setSavedPrint(planFingerprint(form));
+    onDirty(false, '');
+    onSaved(r.value, planId === null);
+  };
+
+  const existing = engine.existing;
+  const keep = (kind: PartKind, id: number | null): string => {
+    const name = nameOf(parts[kind], id);
+    return name ? `Keep: ${name}` : 'Keep: none fitted';
+  };
+  const coilNow = nameOf(parts.coil, existing.coilPartId);
+  const summary = problem && submitted ? { ...clientErrors, ...serverErrors } : {};
+
+  return (
+    <section className="plan-editor" aria-labelledby="plan-editor-title" data-testid="plan-editor">
+      <div className="screen-head">
+        <h2 id="plan-editor-title" ref={headingRef} tabIndex={-1}>
+          {planId === null ? 'New plan' : `Change the plan “${initial.name}”`}
+        </h2>
+        {dirty ? (
+          <span className="badge" data-testid="plan-unsaved">
+            <span aria-hidden="true">●</span> Unsaved changes
+          </span>
+        ) : null}
+      </div>
+      {problem ? (
+        <Notice kind="problem" onDismiss={() => setProblem(null)} testId="plan-status">
+          {problem}
+          {Object.keys(summary).length > 0 ? (
+            <ul className="error-summary">
+              {Object.entries(summary).map(([path, message]) => (
+                <li key={path}>{message}</li>
+              ))}
+            </ul>
+          ) : null}
+        </Notice>
+      ) : null}
+      <FieldErrorsContext.Provider value={errorsCtx}>
+        <form onSubmit={(e) => void save(e)} noValidate aria-label={planId === null ? 'New plan' : `Plan ${initial.name}`}>
+          <div className="group-fields plan-fields">
+            <TextField path="name" label="Plan name" value={form.name} onChange={text('name')} wide placeholder="For example: current-limited unit, ballast out" />
+            <SelectField path="moduleId" label="Ignition module" value={form.moduleId} choices={choicesOf(parts.module, 'None: keep the points', form.moduleId)} onChange={text('moduleId')} />
+            <SelectField
+              path="coilId"
+              label="Coil"
+              value={form.coilId}
+              choices={choicesOf(parts.coil, coilNow ? `Keep: ${coilNow}` : 'Keep the coil fitted now', form.coilId)}
+              onChange={text('coilId')}
+            />
+            <SelectField
+              path="ballastId"
+              label="Ballast resistor"
+              value={form.ballastId}
+              choices={choicesOf(parts.ballast, 'No ballast', form.ballastId)}
+              onChange={(v) => set({ ballastId: v, crankingBypass: v === '' ? false : form.crankingBypass })}
+              hint="Only a ballast on the shelf can be chosen."
+            />
+            {form.ballastId !== '' ? (
+              <CheckField
+                path="crankingBypass"
+                label="Cranking bypass: the starter feeds the coil direct, past the ballast, while cranking"
+                checked={form.crankingBypass}
+                onChange={(v) => set({ crankingBypass: v })}
+              />
+            ) : null}
+            {form.moduleId !== '' ? <FeedChoice value={form.moduleFeed} onChange={(v) => set({ moduleFeed: v })} noBallast={form.ballastId === ''} /> : null}
+            <p className="hint wide">“Keep” leaves the part as the engine has it today.</p>
+            <SelectField path="tachId" label="Rev counter" value={form.tachId} choices={choicesOf(parts.tach, keep('tach', existing.tachPartId), form.tachId)} onChange={text('tachId')} />
+            <SelectField path="leadsId" label="HT leads" value={form.leadsId} choices={choicesOf(parts.leads, keep('leads', existing.leadsPartId), form.leadsId)} onChange={text('leadsId')} />
+            <SelectField path="plugId" label="Spark plugs" value={form.plugId} choices={choicesOf(parts.plug, keep('plug', existing.plugPartId), form.plugId)} onChange={text('plugId')} />
+            <TextField path="plugGapMm" label={`Plug gap (${unitLabel(unit)})`} numeric value={form.plugGap.text} onChange={(v) => set({ plugGap: gapFromText(v, unit) })} />
+            <NotesField path="notes" label="Notes" value={form.notes} onChange={text('notes')} />
+          </div>
+          {/* Pressing a button must not blur the field first: the blur would show its message and move
+              the button out from under the pointer before the click lands. */}
+          <div className="plan-actions" onMouseDown={(e) => e.target instanceof HTMLButtonElement && e.preventDefault()}>
+            <button type="submit" className="primary" disabled={saving}>
+              {saving ? 'Saving…' : planId === null ? 'Save the plan' : 'Save the changes'}
+            </button>
+            <button type="button" onClick={onClose}>
+              {dirty ? 'Close without saving' : 'Close'}
+            </button>
+          </div>
+        </form>
+      </FieldErrorsContext.Provider>
+    </section>
+  );
+}
+
+/** Where the module takes its own supply, as two radio buttons with what each means. */
+function FeedChoice({ value, onChange, noBallast }: { value: PlanForm['moduleFeed']; onChange: (v: PlanForm['moduleFeed']) => void; noBallast: boolean }): ReactNode {
+  const message = useContext(FieldErrorsContext).message('moduleFeed');
+  return (
+    <fieldset className={`field wide feed-choice${message ? ' has-error' : ''}`} id={fieldId('moduleFeed')}>
+      <legend>Where the module takes its own supply</legend>
+      {feedChoices.map((c) => (
+        <label key={c.value} className="feed-option">
+          <input type="radio" name="moduleFeed" value={c.value} checked={value === c.value} onChange={() => onChange(c.value)} />
+          <span>
+            <strong>{c.label}</strong>
+            <span className="hint">{c.explain}</span>
+          </span>
+        </label>
+      ))}
+      {noBallast ? <span className="hint">With no ballast in the plan, both are the same wire.</span> : null}
+      {message ? (
+        <span className="field-error" data-testid="error-moduleFeed">
+          <span aria-hidden="true" className="icon">!</span> {message}
+        </span>
+      ) : null}
+    </fieldset>
+  );
+}

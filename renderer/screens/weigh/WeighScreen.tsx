@@ -1,0 +1,237 @@
+/**
+ * "Weigh a combination": pick the engine, make or change its plans, tick up to three and see them
+ * beside the ignition fitted now (verdicts, charts, the four speeds, every check with why and what
+ * to do), and the best combinations the parts bin offers. Unsaved plan edits are never dropped
+ * without asking, whether the person leaves the screen, picks another engine or opens another plan.
+ */
+import { useEffect, useState, type ReactNode } from 'react';
+import type { Plan, PlanStatus } from '../../../db/schema.js';
+import type { ShelfSuggestion, ShownSetup } from '../../../electron/ipc/channels.js';
+import type { CurrentEngine } from '../../app/current-engine.js';
+import { Confirm } from '../../app/Dialog.js';
+import { useLeaveGuard } from '../../app/leave-guard.js';
+import { Notice } from '../../app/Notice.js';
+import type { Navigate } from '../../app/routes.js';
+import { useGapUnit } from '../../app/units.js';
+import { Cautions } from './Cautions.js';
+import { KeyPointsTable } from './KeyPointsTable.js';
+import { blankPlanForm, planToForm, suggestionToForm, type PlanForm } from './plan-form.js';
+import { PlanEditor } from './PlanEditor.js';
+import { MAX_TICKED, PlanList } from './PlanList.js';
+import { RuleDetails, RuleOverview } from './RuleDetails.js';
+import { SetupCards } from './SetupCards.js';
+import { ShelfList } from './ShelfList.js';
+import { useComparison, useEngine, useEnginesAndParts, useShelfSearch } from './use-weigh-data.js';
+import { WeighCharts } from './WeighCharts.js';
+import { figureText } from './words.js';
+
+type Props = { current: CurrentEngine | null; onEngineChosen: (e: CurrentEngine) => void; navigate: Navigate };
+type EditorState = { key: string; planId: number | null; status: PlanStatus; initial: PlanForm; startsDirty: boolean };
+
+let editorSerial = 0;
+
+export function WeighScreen({ current, onEngineChosen, navigate }: Props): ReactNode {
+  const [unit] = useGapUnit();
+  const { engines, parts } = useEnginesAndParts();
+  const [engineId, setEngineId] = useState<number | null>(current?.id ?? null);
+  const [plansVersion, setPlansVersion] = useState(0);
+  const { engine, plans, plansFor } = useEngine(engineId, plansVersion);
+  const [ticked, setTicked] = useState<{ ids: number[]; for: number | null }>({ ids: [], for: null });
+  const [editor, setEditor] = useState<EditorState | null>(null);
+  const [editing, setEditing] = useState({ dirty: false, name: '' });
+  const [ask, setAsk] = useState<{ then: () => void } | null>(null);
+  const [done, setDone] = useState<string | null>(null);
+
+  const ready = plansFor === engineId && ticked.for === engineId;
+  const comparison = useComparison(engineId, ticked.ids, ready, plansVersion);
+  const search = useShelfSearch(engineId, 0);
+  useLeaveGuard(editing.dirty, editing.name ? `The plan “${editing.name}”` : 'The new plan');
+
+  // Without a remembered engine, or with one that is gone, start on the first in the list.
+  useEffect(() => {
+    const list = engines.value;
+    if (!list || list.length === 0) return;
+    if (engineId === null || !list.some((e) => e.id === engineId)) setEngineId(list[0]!.id);
+  }, [engines.value]);
+
+  // The engine chosen here is the one being worked on.
+  useEffect(() => {
+    const e = engine.value;
+    if (e && e.id === engineId && current?.id !== e.id) onEngineChosen({ id: e.id, name: e.name });
+  }, [engine.value]);
+
+  // A newly shown engine starts with its first plans ticked; after a save, ticks that still name a plan stay.
+  useEffect(() => {
+    if (plansFor !== engineId || engineId === null) return;
+    setTicked((t) => {
+      if (t.for === engineId) return { ids: t.ids.filter((id) => plans.some((p) => p.id === id)), for: engineId };
+      return { ids: plans.slice(0, MAX_TICKED).map((p) => p.id), for: engineId };
+    });
+  }, [plans, plansFor, engineId]);
+
+  /** Runs `then` at once, or after asking when a plan has unsaved changes. */
+  const guarded = (then: () => void): void => {
+    if (editing.dirty) setAsk({ then });
+    else then();
+  };
+
+  const openEditor = (state: Omit<EditorState, 'key'>): void => {
+    setDone(null);
+    setEditor({ ...state, key: `ed${++editorSerial}` });
+    requestAnimationFrame(() => {
+      const el = document.getElementById('plan-editor-title');
+      el?.scrollIntoView({ block: 'start' });
+      document.getElementById('f-name')?.focus({ preventScroll: true });
+    });
+  };
+
+  const e = engine.value;
+  const newPlan = (): void => guarded(() => e && openEditor({ planId: null, status: 'draft', initial: blankPlanForm(e, unit), startsDirty: false }));
+  const editPlan = (p: Plan): void => guarded(() => openEditor({ planId: p.id, status: p.status, initial: planToForm(p, unit), startsDirty: false }));
+  const fromShelf = (s: ShelfSuggestion): void => guarded(() => e && openEditor({ planId: null, status: 'draft', initial: suggestionToForm(s, e, unit), startsDirty: true }));
+
+  const onSaved = (plan: Plan, created: boolean): void => {
+    setEditor(null);
+    setEditing({ dirty: false, name: '' });
+    let tickedNow = ticked.ids.includes(plan.id);
+    if (created && !tickedNow && ticked.ids.length < MAX_TICKED) {
+      setTicked((t) => ({ ids: [...t.ids, plan.id], for: t.for }));
+      tickedNow = true;
+    }
+    setDone(
+      tickedNow
+        ? `Saved the plan “${plan.name}”; it is weighed below beside the ignition fitted now.`
+        : `Saved the plan “${plan.name}”. Untick another plan to weigh this one (at most ${MAX_TICKED} at once).`,
+    );
+    setPlansVersion((v) => v + 1);
+  };
+
+  const chooseEngine = (id: number): void =>
+    guarded(() => {
+      setEditor(null);
+      setDone(null);
+      setEngineId(id);
+    });
+
+  const answer = comparison.value && comparison.value.engineId === engineId ? comparison.value : null;
+  const setups: ShownSetup[] = answer ? [answer.existing, ...answer.candidates] : [];
+  const cautions = answer?.cautions ?? (search.value?.engineId === engineId ? search.value.cautions : []);
+
+  return (
+    <section className="screen weigh" aria-labelledby="weigh-title">
+      <div className="screen-head weigh-head">
+        <h1 id="weigh-title" tabIndex={-1}>
+          Weigh a combination
+        </h1>
+        {e ? <span className="print-only">Engine: {e.name}</span> : null}
+        {engines.value && engines.value.length > 0 ? (
+          <div className="field engine-pick">
+            <label htmlFor="weigh-engine">Engine</label>
+            <select id="weigh-engine" value={engineId ?? ''} onChange={(ev) => chooseEngine(Number(ev.target.value))}>
+              {engines.value.map((x) => (
+                <option key={x.id} value={x.id}>
+                  {x.name}
+                </option>
+              ))}
+            </select>
+          </div>
+        ) : null}
+      </div>
+      {engines.problem ? <Notice kind="problem">{engines.problem}</Notice> : null}
+      {engines.value && engines.value.length === 0 ? (
+        <div className="empty">
+          <p>There is no engine to weigh a combination on yet.</p>
+          <button type="button" className="primary" onClick={() => navigate({ to: 'new-engine' })}>
+            Add an engine
+          </button>
+        </div>
+      ) : null}
+      {engine.problem ? <Notice kind="problem">{engine.problem}</Notice> : null}
+      {done ? (
+        <Notice kind="done" onDismiss={() => setDone(null)} testId="weigh-done">
+          {done}
+        </Notice>
+      ) : null}
+
+      {e && e.id === engineId ? (
+        <>
+          <PlanList
+            plans={plansFor === engineId ? plans : []}
+            parts={Object.values(parts).flat()}
+            ticked={ticked.ids}
+            onTick={(id, on) => setTicked((t) => ({ ids: on ? (t.ids.includes(id) || t.ids.length >= MAX_TICKED ? t.ids : [...t.ids, id]) : t.ids.filter((x) => x !== id), for: t.for }))}
+            onEdit={editPlan}
+            onNew={newPlan}
+            editingId={editor ? (editor.planId ?? 'new') : null}
+          />
+          {editor ? (
+            <PlanEditor
+              key={editor.key}
+              engine={e}
+              parts={parts}
+              initial={editor.initial}
+              planId={editor.planId}
+              status={editor.status}
+              startsDirty={editor.startsDirty}
+              onSaved={onSaved}
+              onClose={() => guarded(() => setEditor(null))}
+              onDirty={(dirty, name) => setEditing((s) => (s.dirty === dirty && s.name === name ? s : { dirty, name }))}
+            />
+          ) : null}
+
+          <section className="results" aria-labelledby="compare-title" aria-busy={comparison.busy || undefined} data-testid="comparison">
+            <h2 id="compare-title">How they compare</h2>
+            {comparison.problem ? <Notice kind="problem">{comparison.problem}</Notice> : null}
+            {!answer && comparison.busy ? <p className="quiet">Weighing…</p> : null}
+            {answer ? (
+              <>
+                {answer.candidates.length === 0 ? <p className="quiet">No plan is ticked: this is the ignition fitted now on its own.</p> : null}
+                <SetupCards setups={setups} margin={answer.marginRatio} />
+                <details className="conditions-used">
+                  <summary>Working conditions these figures assume</summary>
+                  <ul>
+                    {answer.conditions.map((c) => (
+                      <li key={c.name}>
+                        {c.name}: {figureText(c.value, c.unit, unit)} <span className="quiet">({c.measured ? 'measured' : (c.source ?? '')})</span>
+                      </li>
+                    ))}
+                  </ul>
+                </details>
+                <h2>Across the rev range</h2>
+                <WeighCharts setups={setups} margin={answer.marginRatio} />
+                <h2>At four speeds</h2>
+                <KeyPointsTable setups={setups} margin={answer.marginRatio} />
+                <h2>Check by check</h2>
+                <RuleOverview setups={setups} />
+                {setups.map((s, i) => (
+                  <RuleDetails key={`${s.kind}-${s.planId ?? i}`} setup={s} index={i} />
+                ))}
+              </>
+            ) : null}
+          </section>
+          <Cautions cautions={cautions} />
+          <ShelfList answer={search.value?.engineId === engineId ? search.value : null} problem={search.problem} busy={search.busy} onMakePlan={fromShelf} />
+        </>
+      ) : null}
+
+      {ask ? (
+        <Confirm
+          title="Leave the plan without saving?"
+          confirmLabel="Leave and lose the changes"
+          cancelLabel="Stay and keep editing"
+          danger
+          onConfirm={() => {
+            const then = ask.then;
+            setAsk(null);
+            setEditing({ dirty: false, name: '' });
+            then();
+          }}
+          onCancel={() => setAsk(null)}
+          testId="plan-leave-dialog"
+        >
+          <p>{editing.name ? `The plan “${editing.name}”` : 'The new plan'} has changes that are not saved. Going on throws them away.</p>
+        </Confirm>
+      ) : null}
+    </section>
+  );
+}
