@@ -142,7 +142,12 @@ describe('the demo records', () => {
     const ballasted = engines.find((e) => e.cylinders === 4 && e.systemVoltageV === 12 && e.earthPolarity === 'negative' && e.existing.crankingBypass);
     expect(ballasted).toBeDefined();
     expect(part(ballasted!.existing.coilPartId)).toMatchObject({ kind: 'coil', primaryResistanceOhm20C: 1.5, forBallast: true });
-    expect(part(ballasted!.existing.ballastPartId)).toMatchObject({ kind: 'ballast', ballastType: 'iron-wire', coldResistanceOhm: 1.5 });
+    // An iron-wire ballast reads well under its working resistance when cold (it about doubles as
+    // it heats; common practice), so a "1.5 ohm" ballast measures about 0.7 to 1 ohm on the bench.
+    const ballast = part(ballasted!.existing.ballastPartId);
+    expect(ballast).toMatchObject({ kind: 'ballast', ballastType: 'iron-wire' });
+    expect(ballast!.kind === 'ballast' && ballast!.coldResistanceOhm).toBeGreaterThanOrEqual(0.6);
+    expect(ballast!.kind === 'ballast' && ballast!.coldResistanceOhm).toBeLessThanOrEqual(1.5);
 
     expect(engines.some((e) => e.cylinders === 6 && e.systemVoltageV === 12 && e.earthPolarity === 'positive' && e.charging === 'dynamo')).toBe(true);
     expect(engines.some((e) => e.cylinders === 2 && e.cycle === 'four-stroke' && e.systemVoltageV === 6)).toBe(true);

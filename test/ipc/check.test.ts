@@ -145,6 +145,20 @@ describe('check.plans on the demo workshop', () => {
     expect(counts()).toEqual(before);
   });
 
+  it('finds spark with reserve from every demo engine as it is fitted today, since those cars run', async () => {
+    // Common practice: a healthy points-and-coil ignition fires its plugs with voltage to spare, and
+    // a sound magneto does once the engine is running; a fitted setup that "cannot fire" at idle
+    // would mean the model or the demo data is wrong, not the car.
+    const { engines } = await demo();
+    for (const engine of engines) {
+      const answer = await ok<ComparisonAnswer>('check.plans', { engineId: engine.id, planIds: [] });
+      const reserve = answer.existing.rules.find((r) => r.id === 'voltage-reserve');
+      expect(reserve, engine.name).toBeDefined();
+      expect(reserve!.verdict, `${engine.name}: ${reserve!.why}`).not.toBe('fail');
+      expect(answer.existing.keyPoints.idle.reserveRatio, engine.name).toBeGreaterThan(1);
+    }
+  });
+
   it('uses the readings on a plan, marked measured, over the catalogue values', async () => {
     const { engines, plans, parts } = await demo();
     const saloon = engines.find((e) => e.name === 'Green four-door saloon')!;
