@@ -28,13 +28,66 @@ export function cdChargeVoltageV(nominalV: number, capacitanceF: number, charger
 }
 
 /**
- * Secondary peak from resonant charge transfer into the reflected secondary capacitance n^2 Cs:
- * the ideal primary peak is 2 C V / (C + n^2 Cs) (charge sharing in a lossless LC), times n for the
- * secondary, times a transfer efficiency.
+ * The fast transfer loop of a CD firing, primary-referred: the capacitor C (charged to V) rings
+ * through the coil's leakage inductance and the loop resistance into the reflected secondary
+ * capacitance n^2 Cs (the magnetizing inductance, about 100 times the leakage, barely moves in
+ * that time and is left out). `loopOhm` is R_p + R_s / n^2 (the primary winding at its working
+ * temperature, and the secondary winding, lead and plug resistor reflected); `leakageH` is
+ * 2 (1 - k) Lp.
  */
-export function cdSecondaryPeakV(capacitanceF: number, chargeV: number, n: number, secondaryCapacitanceF: number, efficiency: number): number {
+export interface CdTransferLoop {
+  loopOhm: number;
+  leakageH: number;
+}
+
+/**
+ * Leakage inductance of a coupled coil, primary-referred: with L1 = Lp, L2 = n^2 Lp and
+ * M = k n Lp the T-equivalent through the turns ratio n has (1 - k) Lp on each side, 2 (1 - k) Lp
+ * in all (the T equivalent of coupled coils, Alexander & Sadiku, Fundamentals of Electric
+ * Circuits, ch. 13, referred through the turns ratio; chapter from memory).
+ */
+export function leakageInductanceH(primaryInductanceH: number, couplingK: number): number {
+  return 2 * (1 - couplingK) * primaryInductanceH;
+}
+
+/**
+ * Damping ratio of the transfer loop, a series RLC with C in series with n^2 Cs:
+ * zeta = (R / 2) sqrt(C_ser / L_leak), C_ser = C n^2 Cs / (C + n^2 Cs). Infinity without leakage
+ * (an RC loop), 0 without resistance.
+ */
+export function cdTransferDampingRatio(capacitanceF: number, n: number, secondaryCapacitanceF: number, loop: CdTransferLoop): number {
   const reflected = n * n * secondaryCapacitanceF;
-  return (n * efficiency * 2 * capacitanceF * chargeV) / (capacitanceF + reflected);
+  const series = (capacitanceF * reflected) / (capacitanceF + reflected);
+  if (!(loop.loopOhm > 0)) return 0;
+  if (!(loop.leakageH > 0)) return Infinity;
+  return 0.5 * loop.loopOhm * Math.sqrt(series / loop.leakageH);
+}
+
+/**
+ * How far the reflected capacitor's voltage overshoots its charge-sharing value: the step
+ * response of a series RLC, v = V_cm (1 - e^(-alpha t)(cos wd t + (alpha / wd) sin wd t)), has its
+ * first maximum at wd t = pi, V_cm (1 + exp(-pi zeta / sqrt(1 - zeta^2))). At zeta >= 1 the
+ * response rises monotonically towards V_cm and never overshoots (factor 0; continuous at 1).
+ */
+export function cdOvershootFraction(zeta: number): number {
+  if (!(zeta < 1)) return 0;
+  if (!(zeta > 0)) return 1;
+  return Math.exp((-Math.PI * zeta) / Math.sqrt(1 - zeta * zeta));
+}
+
+/**
+ * Secondary peak from resonant charge transfer into the reflected secondary capacitance n^2 Cs.
+ * Charge sharing leaves both capacitors at V_cm = C V / (C + n^2 Cs); the transfer loop overshoots
+ * that by the fraction above, so the primary-referred peak is V_cm (1 + overshoot), which without
+ * loss (zeta = 0) is the familiar 2 C V / (C + n^2 Cs). Times n for the secondary, times the
+ * coil's transfer efficiency for the losses this loop does not draw (the core; see conditions.ts).
+ * Without `loop` the transfer is lossless.
+ */
+export function cdSecondaryPeakV(capacitanceF: number, chargeV: number, n: number, secondaryCapacitanceF: number, efficiency: number, loop?: CdTransferLoop): number {
+  const reflected = n * n * secondaryCapacitanceF;
+  const shared = (capacitanceF * chargeV) / (capacitanceF + reflected);
+  const overshoot = loop ? cdOvershootFraction(cdTransferDampingRatio(capacitanceF, n, secondaryCapacitanceF, loop)) : 1;
+  return n * efficiency * shared * (1 + overshoot);
 }
 
 /**

@@ -1,9 +1,63 @@
 /**
  * A fouled plug: carbon on the insulator nose is a resistance across the gap. The secondary is
- * then a parallel RLC (Ls, C, R_shunt) whose inductor starts with i_break / n and whose capacitor
- * starts empty. The first voltage peak has a closed form; with a low shunt it never reaches the
- * breakdown voltage and the plug does not fire. A fast-rising CD spark loses less to the shunt.
+ * then a parallel RLC (Ls, C, R_shunt) whose inductor starts with the flux current at break over n
+ * and whose capacitor starts empty. The first voltage peak has a closed form; with a low shunt it
+ * never reaches the breakdown voltage and the plug does not fire. A fast-rising CD spark loses
+ * less to the shunt.
+ *
+ * The shunt is there during the dwell too: the secondary then drives current through it, and part
+ * of the primary current feeds that instead of building flux, so a fouled coil charges more
+ * slowly. That is what the charge functions below work out.
  */
+import { chargeCurrentA } from './charge.js';
+
+/**
+ * The shunt seen from the primary: the shunt and the secondary series resistance (winding, lead,
+ * plug resistor) in series, reflected through the turns ratio, (R_shunt + R_s) / n^2. It sits
+ * across the primary inductance (ideal transformer referral).
+ */
+export function reflectedShuntOhm(shuntOhm: number, secondarySeriesOhm: number, n: number): number {
+  return (shuntOhm + secondarySeriesOhm) / (n * n);
+}
+
+/**
+ * Charging time constant of the flux with the shunt across Lp. Thevenin equivalent seen by Lp:
+ * V_th = V' R_sh / (R + R_sh), R_th = R R_sh / (R + R_sh), so the flux current's final value
+ * V_th / R_th = V' / R is the clean final current (at DC the inductance shorts the shunt), and
+ * its time constant is Lp / R_th = tau (1 + R / R_sh). An infinite shunt gives tau back.
+ */
+export function fouledChargeTauS(tauS: number, primaryOhm: number, reflectedOhm: number): number {
+  return tauS * (1 + primaryOhm / reflectedOhm);
+}
+
+/**
+ * Time for the total primary current to reach a current limit while the fouled coil charges. The
+ * total is the flux current plus the shunt branch's v_L / R_sh:
+ * i_p(t) = I_final (1 - (R_sh / (R + R_sh)) e^(-t / tau_f)), which starts at V' / (R + R_sh)
+ * rather than at zero. A limiter holds the total (it sits in the primary's one loop), so this is
+ * when it takes over; 0 when the shunt alone draws the limit, Infinity when it is never reached.
+ */
+export function fouledTimeToLimitS(finalA: number, tauFouledS: number, primaryOhm: number, reflectedOhm: number, limitA: number): number {
+  if (!(limitA < finalA)) return Infinity;
+  if (!(limitA > 0)) return 0;
+  const x = (1 - limitA / finalA) * (1 + primaryOhm / reflectedOhm);
+  if (!(x < 1)) return 0;
+  return -tauFouledS * Math.log(x);
+}
+
+/**
+ * Flux current at break on a fouled plug, the current the secondary inherits (times 1 / n).
+ * Before the limit: I_final (1 - e^(-t / tau_f)). Once the limiter holds the total at I_lim the
+ * flux current still climbs, i_f + (Lp / R_sh) di_f/dt = I_lim, towards I_lim with time constant
+ * `holdTauS` = Lp / R_sh. With no shunt (R_sh infinite: tau_f = tau, hold time constant 0) this is
+ * min(I_final (1 - e^(-t / tau)), I_lim), the clean break current.
+ */
+export function fouledFluxCurrentA(finalA: number, tauFouledS: number, dwellS: number, limitA: number, toLimitS: number, holdTauS: number): number {
+  if (!(dwellS > toLimitS)) return chargeCurrentA(finalA, tauFouledS, dwellS);
+  const atLimit = chargeCurrentA(finalA, tauFouledS, toLimitS);
+  if (!(holdTauS > 0)) return limitA;
+  return limitA - (limitA - atLimit) * Math.exp(-(dwellS - toLimitS) / holdTauS);
+}
 
 /**
  * First voltage peak per ampere of initial inductor current, parallel RLC. alpha = 1/(2RC),

@@ -14,7 +14,7 @@ import type { Baseline } from './rules/context.js';
 import type { CheckOptions, ConditionInputs, EngineSpec, PlugGapSuggestion, SetupReport, SetupSpec } from './types.js';
 
 export * from './types.js';
-export { resolveConditions, defaultConditions, conditionUnits, kelvin, crankingFloorV, CRANKING_FLOOR_TABLE } from './conditions.js';
+export { resolveConditions, defaultConditions, conditionUnits, kelvin, crankingFloorV, CRANKING_FLOOR_TABLE, DEFAULT_COUPLING_K } from './conditions.js';
 export { compareSetups, MAX_CANDIDATES } from './compare.js';
 export { searchBest } from './search.js';
 export { circuitAtRpm } from './report.js';
@@ -24,8 +24,8 @@ export { IRON_RESISTIVITY_TABLE, ironResistivityMicroOhmCm, ironBallastResistanc
 export { chargeCurrentA, timeToReachS, inductorEnergyJ, meanSquareCurrentA2 } from './charge.js';
 export { sparkRateHz, dwellFractionFromAngle, floatedDwellFraction, currentLimitedDwellS } from './dwell.js';
 export { turnsRatio, effectiveSecondaryCapacitanceF, availableSecondaryV, voltsPerAmp, secondaryRiseTimeS, inductiveSparkDurationS, seriesRlcOpening, type SeriesRlcResponse } from './secondary.js';
-export { parallelRlcPeakVPerA, cdFouledFraction } from './fouled.js';
-export { capacitorEnergyJ, rechargeTimeS, cdChargeVoltageV, cdSecondaryPeakV, cdSparkDurationS } from './cd.js';
+export { parallelRlcPeakVPerA, cdFouledFraction, reflectedShuntOhm, fouledChargeTauS, fouledTimeToLimitS, fouledFluxCurrentA } from './fouled.js';
+export { capacitorEnergyJ, rechargeTimeS, cdChargeVoltageV, cdSecondaryPeakV, cdSparkDurationS, leakageInductanceH, cdTransferDampingRatio, cdOvershootFraction, type CdTransferLoop } from './cd.js';
 export { volumeRatioAtAngle, sweptVolumeM3, clearanceVolumeM3 } from './geometry.js';
 export { compressInto, POLYTROPIC_INDEX, type CompressedState } from './compression.js';
 export { reducedGapCm, airBreakdownV, paschenBreakdownV, paschenBreakdownFromReducedV, REVERSED_POLARITY_FACTOR, ATM_PA } from './breakdown.js';

@@ -12,6 +12,10 @@ import { gapOf, requiredFor, ruleContext, worstReserve, type Session } from './s
 import { evaluateGrid, type SweepScope, type Workspace } from './sweep.js';
 import type { KeyOnReport } from './types.js';
 
+/** The sweep scopes of the verdict-only pass: no fouled-plug column (only the report reads it). */
+const VERDICT: SweepScope = { verdictOnly: true };
+const VERDICT_CRANKING: SweepScope = { verdictOnly: true, crankingOnly: true };
+
 export interface Judgement {
   /** Lowest reserve ratio from cranking to redline. */
   worstRatio: number;
@@ -21,13 +25,14 @@ export interface Judgement {
 
 /**
  * Judge `prep` (its key-on state already worked out) into `ws`; `failed[k]` is set to 1 when
- * rule `FAIL_TESTS[k]` fails and 0 otherwise. `scope` passes through to the sweep (the search's
- * cranking-bypass twin recomputes only the cranking points).
+ * rule `FAIL_TESTS[k]` fails and 0 otherwise. `scope.crankingOnly` passes through to the sweep
+ * (the search's cranking-bypass twin recomputes only the cranking points); the sweep always leaves
+ * out the columns only a report reads (`verdictOnly`).
  */
 export function judge(s: Session, prep: PreparedSetup, keyOn: KeyOnReport, baseline: Baseline | null, ws: Workspace, failed: Uint8Array, scope?: SweepScope): Judgement {
   const setup = prep.spec;
   const gapM = gapOf(setup, prep);
-  evaluateGrid(prep, s.grids.sweep, gapM, ws, requiredFor(s, gapM, prep.polarityFactor), scope);
+  evaluateGrid(prep, s.grids.sweep, gapM, ws, requiredFor(s, gapM, prep.polarityFactor), scope?.crankingOnly === true ? VERDICT_CRANKING : VERDICT);
   const { worstRatio, worstIndex } = worstReserve(ws, s.grids.redlineIndex);
   const ctx = ruleContext(s, setup, prep, gapM, ws, keyOn, baseline, null, worstRatio, worstIndex);
   let fails = false;

@@ -3,10 +3,10 @@
  * and cold (with the iron ballast at its self-heated equilibrium), time constants, final currents,
  * secondary constants, the CD stage. Done once per setup so the rpm loop is arithmetic only.
  */
-import { kelvin } from './conditions.js';
+import { DEFAULT_COUPLING_K, kelvin } from './conditions.js';
 import { meanSquareCurrentA2 } from './charge.js';
 import { REVERSED_POLARITY_FACTOR } from './breakdown.js';
-import { cdSecondaryPeakV, cdSparkDurationS } from './cd.js';
+import { cdSecondaryPeakV, cdSparkDurationS, leakageInductanceH } from './cd.js';
 import { dwellFractionFromAngle } from './dwell.js';
 import { parallelRlcPeakVPerA } from './fouled.js';
 import { copperResistanceOhm, finalCurrentA } from './primary.js';
@@ -24,8 +24,10 @@ export interface PreparedCd {
   supplyMinV: number;
   cutOutV: number;
   multiSparkBelowRpm: number | null;
-  /** Secondary peak per volt of charge. */
+  /** Secondary peak per volt of charge, running (hot primary winding in the transfer loop). */
   peakPerChargeV: number;
+  /** The same while cranking (cold winding). */
+  peakPerChargeCrankingV: number;
   riseRateVPerS: number;
   sparkDurationS: number;
 }
@@ -210,6 +212,10 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     if (kind === 'capacitive-discharge') {
       const stage = m.cd;
       const capF = stage ? pos(stage.capacitorF, 1e-6, 'The CD capacitor', issues) : 0;
+      // The fast transfer rings through the leakage inductance and the loop resistance: the
+      // primary winding plus the secondary series resistance reflected through n^2 (cd.ts).
+      const leakageH = leakageInductanceH(lp, DEFAULT_COUPLING_K.value);
+      const secondaryReflectedOhm = rs / (n * n);
       cd = {
         capacitorF: capF,
         nominalV: stage ? nonNeg(stage.chargeVoltageV, 0) : 0,
@@ -217,7 +223,8 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
         supplyMinV: nonNeg(m.supplyMinV, 0),
         cutOutV: m.cutOutV ?? 0.75 * nonNeg(m.supplyMinV, 0),
         multiSparkBelowRpm: stage?.multiSparkBelowRpm ?? null,
-        peakPerChargeV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta) : 0,
+        peakPerChargeV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta, { loopOhm: coilHot + secondaryReflectedOhm, leakageH }) : 0,
+        peakPerChargeCrankingV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta, { loopOhm: coilCold + secondaryReflectedOhm, leakageH }) : 0,
         riseRateVPerS: pos(c.cdRiseRateVPerS.value, 5e9, 'The CD rise rate', issues),
         sparkDurationS: cdSparkDurationS(lp, capF),
       };
@@ -266,7 +273,8 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     arcV: pos(c.arcVoltageV.value, 700, 'The arc voltage', issues),
     fouledShuntOhm: fouledOhm,
     voltsPerAmp: voltsPerAmp(lp, cEff),
-    // The inductor starts with i_break / n; the efficiency scales the delivered peak.
+    // The inductor starts with the flux current at break over n (the sweep works that current
+    // out with the shunt loading the dwell too, fouled.ts); the efficiency scales the delivered peak.
     fouledVPerA: (eta / n) * parallelRlcPeakVPerA(ls, cEff, fouledOhm),
     riseS: secondaryRiseTimeS(ls, cEff),
     polarityFactor: setup.coilWiring === 'reversed' ? REVERSED_POLARITY_FACTOR : 1,

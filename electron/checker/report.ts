@@ -2,7 +2,7 @@
  * Turn an analysis (columns of numbers) into the plain report the UI, the CLI and the SPICE deck
  * writer read. Every number is forced finite here as a last guard.
  */
-import { conditionUnits } from './conditions.js';
+import { conditionUnits, DEFAULT_COUPLING_K } from './conditions.js';
 import type { Analysis, Session } from './session.js';
 import type { RpmGrid } from './grid.js';
 import type { Workspace } from './sweep.js';
@@ -82,6 +82,8 @@ function inputsOf(s: Session, a: Analysis): Figure[] {
   }
   const coil = a.setup.coil;
   out.push({ name: 'coil primary resistance at 20 degC', value: coil.primaryResistanceOhm20C.value, unit: 'ohm', provenance: coil.primaryResistanceOhm20C.provenance });
+  // Only the capacitive-discharge peak uses the coupling (its transfer rings through the leakage).
+  if (a.prep.cd) out.push({ name: 'coil coupling coefficient', value: DEFAULT_COUPLING_K.value, unit: '', provenance: DEFAULT_COUPLING_K.provenance });
   const b = a.setup.ballast;
   if (b) {
     out.push({ name: 'ballast resistance at 20 degC', value: b.coldResistanceOhm.value, unit: 'ohm', provenance: b.coldResistanceOhm.provenance });

@@ -7,7 +7,7 @@
 import { cdChargeVoltageV } from './cd.js';
 import { chargeCurrentA, timeToReachS } from './charge.js';
 import { airBreakdownV, paschenBreakdownFromReducedV } from './breakdown.js';
-import { cdFouledFraction } from './fouled.js';
+import { cdFouledFraction, fouledChargeTauS, fouledFluxCurrentA, fouledTimeToLimitS, reflectedShuntOhm } from './fouled.js';
 import { magnetoBreakCurrentA } from './magneto.js';
 import { inductiveSparkDurationS } from './secondary.js';
 import type { RpmGrid } from './grid.js';
@@ -75,6 +75,13 @@ export interface SweepScope {
    * those of the combination just swept (the bypass only changes the cranking path).
    */
   crankingOnly?: boolean;
+  /**
+   * Leave out the fouled-plug column, which only the report reads (no rule and no fail test looks
+   * at it); it is filled with NaN, so anything that did read it would disagree with the full
+   * sweep. The search's verdict-only pass (judge.ts) uses it: on points and fixed-duty modules the
+   * fouled charge is one more exponential at every point.
+   */
+  verdictOnly?: boolean;
 }
 
 /**
@@ -96,8 +103,9 @@ export function evaluateGrid(p: PreparedSetup, grid: RpmGrid, gapM: number, ws: 
     ws.requiredFrom = null;
   }
   const crankingOnly = scope?.crankingOnly === true;
-  if (p.mode === DwellMode.Cd) cdPoints(p, grid, ws, crankingOnly);
-  else inductivePoints(p, grid, ws, crankingOnly);
+  const fouledToo = scope?.verdictOnly !== true;
+  if (p.mode === DwellMode.Cd) cdPoints(p, grid, ws, crankingOnly, fouledToo);
+  else inductivePoints(p, grid, ws, crankingOnly, fouledToo);
 }
 
 /** Available / required, with a gap that needs nothing counted as a huge reserve. */
@@ -106,7 +114,7 @@ function reserveRatio(available: number, required: number): number {
 }
 
 /** Capacitive discharge: the charge voltage the charger reaches each period sets everything. */
-function cdPoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: boolean): void {
+function cdPoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: boolean, fouledToo: boolean): void {
   const cd = p.cd;
   let lastRise = NaN;
   let lastFouledFraction = 0;
@@ -129,9 +137,9 @@ function cdPoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: 
       moduleW = ((0.5 * cd.capacitorF * v * v) / period) * (0.3 / 0.7);
     }
     const energy = cd ? 0.5 * cd.capacitorF * v * v : 0;
-    const peak = cd ? Math.min(cd.peakPerChargeV * v, p.capV) : 0;
+    const peak = cd ? Math.min((cranking ? cd.peakPerChargeCrankingV : cd.peakPerChargeV) * v, p.capV) : 0;
     const rise = cd && peak > 0 ? peak / cd.riseRateVPerS : 0;
-    if (rise !== lastRise) {
+    if (fouledToo && rise !== lastRise) {
       lastRise = rise;
       lastFouledFraction = cdFouledFraction(rise, p.fouledShuntOhm, p.secondaryCapacitanceF);
     }
@@ -141,7 +149,7 @@ function cdPoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: 
     ws.energyJ[i] = energy;
     ws.riseS[i] = rise;
     ws.durationS[i] = peak > 0 && cd ? cd.sparkDurationS : 0;
-    ws.fouledV[i] = peak * lastFouledFraction;
+    ws.fouledV[i] = fouledToo ? peak * lastFouledFraction : NaN;
     ws.cdChargeV[i] = v;
     ws.multiSpark[i] = multi;
     ws.moduleW[i] = moduleW;
@@ -151,14 +159,23 @@ function cdPoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: 
 }
 
 /** Inductive: the coil charges for the dwell and hands 0.5 L i^2 to the secondary at break. */
-function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: boolean): void {
+function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: boolean, fouledToo: boolean): void {
   const magneto = p.mode === DwellMode.Magneto;
   // Time for the RL rise to reach the module's current limit, per supply case (Infinity if never).
   const limitRunS = timeToReachS(p.iFinalRunningA, p.tauRunningS, p.limitA);
   const limitCrankS = timeToReachS(p.iFinalCrankingA, p.tauCrankingS, p.limitA);
+  // On a fouled plug the shunt loads the dwell too (fouled.ts): the flux charges with a longer
+  // time constant, and a limiter, which holds the total primary current, takes over at another time.
+  const shuntOhm = reflectedShuntOhm(p.fouledShuntOhm, p.secondaryResistanceOhm, p.n);
+  const holdTauS = p.primaryInductanceH / shuntOhm;
+  const tauFouledRunS = fouledChargeTauS(p.tauRunningS, p.rRunningOhm, shuntOhm);
+  const tauFouledCrankS = fouledChargeTauS(p.tauCrankingS, p.rCrankingOhm, shuntOhm);
+  const fouledLimitRunS = fouledTimeToLimitS(p.iFinalRunningA, tauFouledRunS, p.rRunningOhm, shuntOhm, p.limitA);
+  const fouledLimitCrankS = fouledTimeToLimitS(p.iFinalCrankingA, tauFouledCrankS, p.rCrankingOhm, shuntOhm, p.limitA);
   let lastCase = -1;
   let lastDwell = NaN;
   let lastCharged = 0;
+  let lastFluxA = 0;
   let lastCurrent = NaN;
   let lastDuration = 0;
   for (let i = 0; i < grid.n; i++) {
@@ -188,6 +205,11 @@ function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankin
         lastDwell = dwell;
         lastCharged = chargeCurrentA(iFinal, tau, dwell);
         if (lastCharged > p.limitA) lastCharged = p.limitA;
+        if (fouledToo) {
+          lastFluxA = cranking
+            ? fouledFluxCurrentA(iFinal, tauFouledCrankS, dwell, p.limitA, fouledLimitCrankS, holdTauS)
+            : fouledFluxCurrentA(iFinal, tauFouledRunS, dwell, p.limitA, fouledLimitRunS, holdTauS);
+        }
       }
       current = lastCharged;
       if (p.switchDropV > 0 || p.limitA < Infinity) {
@@ -203,7 +225,8 @@ function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankin
     const energy = 0.5 * p.primaryInductanceH * current * current;
     let available = current * p.voltsPerAmp * p.eta;
     if (available > p.capV) available = p.capV;
-    let fouled = current * p.fouledVPerA;
+    // A magneto's fouled peak keeps its clean break current (its armature is not a battery RL charge).
+    let fouled = (magneto ? current : lastFluxA) * p.fouledVPerA;
     if (fouled > p.capV) fouled = p.capV;
     if (current !== lastCurrent) {
       lastCurrent = current;
@@ -215,7 +238,7 @@ function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankin
     ws.energyJ[i] = energy;
     ws.riseS[i] = p.riseS;
     ws.durationS[i] = lastDuration;
-    ws.fouledV[i] = fouled;
+    ws.fouledV[i] = fouledToo ? fouled : NaN;
     ws.cdChargeV[i] = 0;
     ws.multiSpark[i] = 0;
     ws.moduleW[i] = moduleW;

@@ -5,6 +5,7 @@
  * beyond the circuit itself; ngspice then solves that circuit independently of the checker's
  * closed forms, which is what makes it a useful outside reference.
  */
+import { DEFAULT_COUPLING_K } from '../checker/index.js';
 
 /** How the coil's primary is fed and switched while charging. */
 export interface PrimarySide {
@@ -68,15 +69,16 @@ export interface DeckOptions {
 }
 
 /**
- * Coupling of a closed-iron ignition coil. The checker's closed forms assume an ideal
- * transformer (k = 1), which a SPICE K element cannot be (the inductance matrix becomes
- * singular). k = 0.995 leaves 1 - k^2 = 1 % of the primary energy in leakage: close enough to
- * ideal that the first secondary peak moves by well under 1 % between k = 0.995 and k = 0.999,
- * yet a real, non-zero leakage inductance that sets the capacitive-discharge rise time
- * (2 (1 - k) Lp in series with the capacitors). Oil-filled canister coils are usually quoted in
- * the 0.98 to 0.999 range (from memory).
+ * Coupling of a closed-iron ignition coil: the checker's labelled default (`DEFAULT_COUPLING_K`,
+ * 0.995, from memory: oil-filled canister coils are usually quoted at 0.98 to 0.999), so the deck
+ * and the checker's capacitive-discharge closed form use one value. The inductive closed forms
+ * assume an ideal transformer (k = 1), which a SPICE K element cannot be (the inductance matrix
+ * becomes singular). k = 0.995 leaves 1 - k^2 = 1 % of the primary energy in leakage: close enough
+ * to ideal that the first inductive secondary peak moves by well under 1 % between k = 0.995 and
+ * k = 0.999, yet a real, non-zero leakage inductance 2 (1 - k) Lp that sets the capacitive-discharge
+ * transfer (its rise and, with the loop resistance, its damping).
  */
-export const defaultCouplingK = 0.995;
+export const defaultCouplingK: number = DEFAULT_COUPLING_K.value;
 
 /** Fouled-plug shunt when none is given: carbon tracking of a few hundred kilohm (from memory). */
 export const defaultFouledShuntOhm = 500e3;

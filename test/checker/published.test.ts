@@ -21,6 +21,14 @@ import {
   availableSecondaryV,
   voltsPerAmp,
   effectiveSecondaryCapacitanceF,
+  cdOvershootFraction,
+  cdTransferDampingRatio,
+  leakageInductanceH,
+  reflectedShuntOhm,
+  fouledChargeTauS,
+  fouledTimeToLimitS,
+  fouledFluxCurrentA,
+  timeToReachS,
 } from '../../electron/checker/index.js';
 
 describe('Alexander & Sadiku, Fundamentals of Electric Circuits, sec. 7.9 (automobile ignition)', () => {
@@ -141,5 +149,85 @@ describe('ngspice reference point in ngspice-notes (measured with ngspice 39)', 
     const v = availableSecondaryV(4, vpa, 1, Infinity);
     expect(v / 1000).toBeCloseTo(34.9, 1);
     expect(Math.abs(v - 35_000) / 35_000).toBeLessThan(0.01);
+  });
+});
+
+describe('CD transfer through the leakage inductance (series RLC step response)', () => {
+  // Peak overshoot of an underdamped second-order step response, exp(-pi zeta / sqrt(1 - zeta^2)):
+  // the tabulated 16.3 % at zeta 0.5, 9.5 % at 0.6, 4.6 % at 0.7 (Ogata, Modern Control
+  // Engineering, sec. 5-3; Nise, Control Systems Engineering, sec. 4.6).
+  it('overshoots 16.3 %, 9.5 % and 4.6 % at zeta 0.5, 0.6 and 0.7', () => {
+    expect(cdOvershootFraction(0.5)).toBeCloseTo(0.163, 3);
+    expect(cdOvershootFraction(0.6)).toBeCloseTo(0.095, 3);
+    expect(cdOvershootFraction(0.7)).toBeCloseTo(0.046, 3);
+  });
+  it('does not overshoot at or above critical damping, and tends to 0 as zeta rises to 1', () => {
+    expect(cdOvershootFraction(1)).toBe(0);
+    expect(cdOvershootFraction(3)).toBe(0);
+    expect(cdOvershootFraction(0.999)).toBeLessThan(1e-20);
+  });
+  it('recovers the lossless charge sharing 2 C V / (C + n^2 Cs) as the loop resistance goes to zero (zeta -> 0)', () => {
+    const lossless = (100 * 2 * 1e-6 * 400) / (1e-6 + 100 * 100 * 70e-12);
+    expect(cdSecondaryPeakV(1e-6, 400, 100, 70e-12, 1, { loopOhm: 0, leakageH: 80e-6 })).toBeCloseTo(lossless, 6);
+    expect(cdSecondaryPeakV(1e-6, 400, 100, 70e-12, 1, { loopOhm: 1e-9, leakageH: 80e-6 }) / lossless).toBeCloseTo(1, 8);
+    expect(cdSecondaryPeakV(1e-6, 400, 100, 70e-12, 1) / lossless).toBeCloseTo(1, 12);
+  });
+  it('settles at the charge-sharing value n C V / (C + n^2 Cs) without leakage (an RC loop cannot overshoot)', () => {
+    expect(cdSecondaryPeakV(1e-6, 400, 100, 70e-12, 1, { loopOhm: 4, leakageH: 0 })).toBeCloseTo((100 * 1e-6 * 400) / 1.7e-6, 6);
+  });
+  it('gives 38.45 kV for 1 uF at 400 V, n 100, 70 pF, Lp 8 mH, k 0.995, 2 ohm primary and 20 kohm secondary (worked by hand)', () => {
+    // Leakage 2 (1 - k) Lp = 80 uH; n^2 Cs = 0.7 uF; V_cm = 400 / 1.7 = 235.29 V; C_ser = 0.41176 uF;
+    // R = 2 + 20 000 / 100^2 = 4 ohm; zeta = 2 sqrt(0.41176e-6 / 80e-6) = 0.14349;
+    // overshoot exp(-pi 0.14349 / sqrt(1 - 0.14349^2)) = 0.63414; peak 100 x 235.29 x 1.63414 = 38 450 V.
+    const leak = leakageInductanceH(8e-3, 0.995);
+    expect(leak).toBeCloseTo(80e-6, 12);
+    const loop = { loopOhm: 2 + 20_000 / 100 ** 2, leakageH: leak };
+    expect(cdTransferDampingRatio(1e-6, 100, 70e-12, loop)).toBeCloseTo(0.14349, 5);
+    expect(cdSecondaryPeakV(1e-6, 400, 100, 70e-12, 1, loop)).toBeCloseTo(38_450.3, 0);
+    // The efficiency multiplies once (the losses the loop does not draw).
+    expect(cdSecondaryPeakV(1e-6, 400, 100, 70e-12, 0.8, loop)).toBeCloseTo(0.8 * 38_450.3, 0);
+  });
+});
+
+describe('fouled plug loading the dwell (Thevenin equivalent seen by the primary inductance)', () => {
+  it('reflects the shunt and secondary resistance through n^2', () => {
+    expect(reflectedShuntOhm(492_000, 8_000, 100)).toBeCloseTo(50, 12);
+  });
+  it('gives 2.113 A against the clean 2.212 A for 14 V, 4 ohm, 8 mH, 2 ms dwell, 500 kohm shunt at n 100 (worked by hand)', () => {
+    // R_sh = 500 000 / 100^2 = 50 ohm; tau = 2 ms; tau_f = 2 ms x (1 + 4 / 50) = 2.16 ms;
+    // I_final = 3.5 A unchanged (at DC the inductance shorts the shunt); 3.5 (1 - e^(-2 / 2.16)) = 2.1134 A.
+    const tauF = fouledChargeTauS(2e-3, 4, 50);
+    expect(tauF).toBeCloseTo(2.16e-3, 12);
+    expect(fouledFluxCurrentA(3.5, tauF, 2e-3, Infinity, Infinity, 8e-3 / 50)).toBeCloseTo(2.11342, 5);
+    expect(chargeCurrentA(3.5, 2e-3, 2e-3)).toBeCloseTo(2.21242, 5);
+  });
+  it('recovers the clean break current i_break as the shunt goes to infinity, with and without a current limit', () => {
+    const tau = 8e-3 / 4;
+    for (const [dwell, limit] of [[2e-3, Infinity], [2e-3, 3], [0.5e-3, 3], [6e-3, 3]] as const) {
+      const rsh = Infinity;
+      const tauF = fouledChargeTauS(tau, 4, rsh);
+      const toLimit = fouledTimeToLimitS(3.5, tauF, 4, rsh, limit);
+      expect(toLimit).toBeCloseTo(timeToReachS(3.5, tau, limit), 12);
+      expect(fouledFluxCurrentA(3.5, tauF, dwell, limit, toLimit, 8e-3 / rsh)).toBeCloseTo(Math.min(chargeCurrentA(3.5, tau, dwell), limit), 12);
+    }
+  });
+  it('matches the two-branch circuit integrated step by step (KVL round the loop, KCL at the coil), limiter included', () => {
+    // Primary: V' through R into Lp in parallel with R_sh; a limiter holds the total primary current
+    // at I_lim. Total current i_p = min((V' + R_sh i_f) / (R + R_sh), I_lim); Lp di_f/dt = R_sh (i_p - i_f).
+    const v = 14, r = 4, lp = 8e-3, rsh = 50;
+    // 2.7 ms at 2.5 A is just past the limiter taking over (2.54 ms), where the flux current still trails the limit.
+    for (const [dwell, limit] of [[2e-3, Infinity], [4e-3, 3], [1e-3, 2.5], [2.7e-3, 2.5], [3e-3, 0.2]] as const) {
+      const f = (i: number): number => (rsh * (Math.min((v + rsh * i) / (r + rsh), limit) - i)) / lp;
+      const steps = 40_000;
+      const h = dwell / steps;
+      let i = 0;
+      for (let k = 0; k < steps; k++) {
+        const k1 = f(i), k2 = f(i + 0.5 * h * k1), k3 = f(i + 0.5 * h * k2), k4 = f(i + h * k3);
+        i += (h / 6) * (k1 + 2 * k2 + 2 * k3 + k4);
+      }
+      const tauF = fouledChargeTauS(lp / r, r, rsh);
+      const got = fouledFluxCurrentA(v / r, tauF, dwell, limit, fouledTimeToLimitS(v / r, tauF, r, rsh, limit), lp / rsh);
+      expect(Math.abs(got - i), `dwell ${dwell}, limit ${limit}: ${got} against ${i}`).toBeLessThan(1e-5);
+    }
   });
 });

@@ -259,6 +259,13 @@ describe('plug-gap', () => {
 });
 
 describe('module-heat', () => {
+  it('passes a points setup and says in a full sentence that there is no module to heat', () => {
+    const r = checkSetup(fourCylinder, pointsSetup());
+    expect(verdict(r, 'module-heat')).toBe('pass');
+    const why = r.rules.find((x) => x.id === 'module-heat')!.why;
+    expect(why).toMatch(/^[A-Z].* module.*\.$/);
+    expect(why.split(' ').length).toBeGreaterThan(5);
+  });
   it('cautions or fails a current-limited module holding the limit long on a low-resistance coil', () => {
     // Held 3 ms at 5 A: (14 - 1.5 - 5 x 0.6) x 5 = 47.5 W for 3 ms of each 5 ms period at redline.
     const low = coil({ primaryResistanceOhm20C: { value: 0.4, provenance: 'catalogue' }, primaryInductanceH: 0.003 });

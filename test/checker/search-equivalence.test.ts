@@ -27,7 +27,7 @@ import {
   type SetupReport,
   type SetupSpec,
 } from '../../electron/checker/index.js';
-import { cdFouledFraction } from '../../electron/checker/fouled.js';
+import { cdFouledFraction, fouledChargeTauS, fouledFluxCurrentA, fouledTimeToLimitS, reflectedShuntOhm } from '../../electron/checker/fouled.js';
 import { gapMeetsMargin, worstRatioForGap } from '../../electron/checker/gap.js';
 import { withCrankingBypass } from '../../electron/checker/cranking.js';
 import { prepareSetup } from '../../electron/checker/prepare.js';
@@ -293,6 +293,23 @@ describe('the cranking-bypass twin', () => {
   });
 });
 
+describe('the verdict-only sweep', () => {
+  it('gives every column of the full sweep except the fouled-plug peak, which it leaves NaN', () => {
+    const s = createSession(fourCylinder);
+    const input = generatedSearch({ coils: 6, modules: 10, ballasts: 1, seed: 21 });
+    const full = createWorkspace(s.grids.sweep.n);
+    const verdict = createWorkspace(s.grids.sweep.n);
+    const others = COLUMNS.filter((k) => k !== 'fouledV');
+    for (const setup of [...combinations(input).map((c) => c.setup), ...oddSetups()]) {
+      const p = prepareSetup(s.engine, setup, s.conditions, s.model);
+      evaluateGrid(p, s.grids.sweep, 0.8e-3, full);
+      evaluateGrid(p, s.grids.sweep, 0.8e-3, verdict, undefined, { verdictOnly: true });
+      for (const k of others) expect(Array.from(verdict[k]), `${setup.label} ${k}`).toEqual(Array.from(full[k]));
+      expect(Array.from(verdict.fouledV).every((v) => Number.isNaN(v)), setup.label).toBe(true);
+    }
+  });
+});
+
 describe('the plug-gap bisection', () => {
   it('stops at the first rpm under the margin and still answers as the full worst-ratio scan does', () => {
     const input = generatedSearch({ coils: 6, modules: 8, ballasts: 1, seed: 13 });
@@ -374,6 +391,14 @@ function pointByPointMismatches(s: ReturnType<typeof createSession>, g: ReturnTy
       check('energy', setup, i, ws.energyJ[i]!, 0.5 * p.primaryInductanceH * current * current);
       // t = (Ls/Rs) ln(1 + Rs Is0 / V_arc), Is0 = eta i / n (secondary.ts).
       check('spark duration', setup, i, ws.durationS[i]!, inductiveSparkDurationS(p.secondaryInductanceH, p.secondaryResistanceOhm, (p.eta * current) / p.n, p.arcV));
+      // Fouled plug: the flux current of a charge loaded by the reflected shunt (Thevenin seen by
+      // Lp, fouled.ts), times the parallel-RLC peak per ampere, capped by the clamp; a magneto
+      // keeps its clean break current.
+      const r = cranking ? p.rCrankingOhm : p.rRunningOhm;
+      const rsh = reflectedShuntOhm(p.fouledShuntOhm, p.secondaryResistanceOhm, p.n);
+      const tauF = fouledChargeTauS(tau, r, rsh);
+      const flux = p.mode === DwellMode.Magneto ? current : fouledFluxCurrentA(iFinal, tauF, dwell, p.limitA, fouledTimeToLimitS(iFinal, tauF, r, rsh, p.limitA), p.primaryInductanceH / rsh);
+      check('fouled peak', setup, i, ws.fouledV[i]!, Math.min(flux * p.fouledVPerA, p.capV));
     }
   }
   return out;

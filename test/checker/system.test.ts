@@ -82,6 +82,15 @@ describe('fouled plug (parallel RLC, closed form)', () => {
 });
 
 describe('capacitive discharge', () => {
+  it('labels the coupling coefficient its peak rests on, as a default from memory', () => {
+    const r = checkSetup(fourCylinder, moduleSetup(cdModule()));
+    const k = r.inputs.find((f) => f.name === 'coil coupling coefficient');
+    expect(k?.provenance).toBe('default (from memory)');
+    // Oil-filled canister coils: 0.98 to 0.999 (from memory).
+    expect(k!.value).toBeGreaterThanOrEqual(0.98);
+    expect(k!.value).toBeLessThan(1);
+    expect(checkSetup(fourCylinder, pointsSetup()).inputs.some((f) => f.name === 'coil coupling coefficient')).toBe(false);
+  });
   it('charges fully when the period allows and falls as sqrt(2 P T / C) when it does not', () => {
     // 1 uF to 400 V needs 80 mJ; a 40 W charger takes 2 ms.
     expect(cdChargeVoltageV(400, 1e-6, 40, 0.01, 14, 8, 6)).toBeCloseTo(400, 9);

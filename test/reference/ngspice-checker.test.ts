@@ -5,8 +5,10 @@
  * circuit on its own, and the checker's closed forms must agree with it:
  *   current at break and stored energy within 1 % at three dwell times (idle, mid-range, top);
  *   first secondary peak (condenser or module, coupled coil) within 5 %;
- *   fouled-plug first peak within 5 %;
- *   capacitive-discharge first peak within 5 %.
+ *   fouled-plug first peak within 5 % (the shunt across the secondary is there during the dwell
+ *   as well, in the deck and in the checker's charge);
+ *   capacitive-discharge first peak within 5 % (the checker's transfer loop with the coil's
+ *   winding resistance and leakage at the exporter's coupling, which is the checker's default).
  */
 import { describe, expect, it } from 'vitest';
 import { buildDeck, circuitFromReport } from '../../electron/spice/index.js';

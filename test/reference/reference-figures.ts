@@ -1,8 +1,11 @@
 /**
  * The checker's figures that ngspice can reproduce, at one sweep point. ngspice simulates the
- * circuit without the checker's transfer efficiency (a labelled coil-loss assumption it cannot
- * see), so the secondary peaks compared are the checker's lossless ones: its peak divided by the
- * efficiency, and never above the clamp (n x V_clamp), which is a hard physical limit in both.
+ * circuit without the checker's transfer efficiency (a labelled allowance for the core losses
+ * neither side draws), so the secondary peaks compared are the checker's before the efficiency:
+ * its peak divided by the efficiency, and never above the clamp (n x V_clamp), which is a hard
+ * physical limit in both. For an inductive coil that is the lossless peak; for a CD firing it
+ * already carries the damping of the transfer loop (winding resistance and leakage, cd.ts), which
+ * ngspice draws too. The names keep "lossless" for "without the efficiency".
  */
 import type { OperatingPoint, SetupReport } from '../../electron/checker/index.js';
 

@@ -2,7 +2,8 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { buildDeck, DeckError, spiceNumber } from '../../electron/spice/index.js';
+import { DEFAULT_COUPLING_K } from '../../electron/checker/index.js';
+import { buildDeck, DeckError, defaultCouplingK, spiceNumber } from '../../electron/spice/index.js';
 
 const dir = resolve(import.meta.dirname, '../../electron/spice');
 
@@ -23,6 +24,21 @@ describe('electron/spice', () => {
     expect(spiceNumber(0.25e-6)).toBe('250n');
     expect(spiceNumber(80e-12)).toBe('80p');
     expect(() => spiceNumber(Number.NaN)).toThrow();
+  });
+
+  it('draws its coupling element with the k the checker\'s capacitive-discharge closed form uses (one labelled default)', () => {
+    const circuit = {
+      title: 'coupling',
+      primary: { supplyV: 14, harnessResistanceOhm: 0.1, ballastResistanceOhm: 0, coilResistanceOhm: 3, primaryInductanceH: 8e-3, contactResistanceOhm: 0, switchDropV: 0, currentLimitA: null, dwellS: 3e-3, condenserF: null, primaryClampV: null },
+      secondary: { turnsRatio: 100, secondaryCapacitanceF: 70e-12, secondaryResistanceOhm: 8000 },
+      cd: { capacitorF: 1e-6, chargeVoltageV: 400 },
+    };
+    expect(defaultCouplingK).toBe(DEFAULT_COUPLING_K.value);
+    expect(DEFAULT_COUPLING_K.provenance).toBe('default (from memory)');
+    for (const scenario of ['break', 'cd'] as const) {
+      const k = /^K1 L1 L2 (\S+)$/m.exec(buildDeck(circuit, scenario).text);
+      expect(Number(k?.[1]), scenario).toBe(DEFAULT_COUPLING_K.value);
+    }
   });
 
   it('refuses a circuit with an impossible value, naming the field', () => {

@@ -41,7 +41,7 @@ export const moduleHeat: Rule = (ctx) => {
   const { ws, grid } = ctx;
   const id = 'module-heat';
   const title = 'Module heat while running';
-  if (!isModuleKind(ctx)) return result(id, title, 'pass', [], 'No module.', 'Nothing to do.');
+  if (!isModuleKind(ctx)) return result(id, title, 'pass', [], 'This setup has no electronic module, so there is no module transistor to overheat.', 'Nothing to do.');
   const peak = maxOver(ws.moduleW, 0, ws.n - 1);
   const figures = [fig('highest module dissipation', peak.value, 'W'), fig('at rpm', grid.rpm[peak.index]!, 'rpm')];
   const why = 'A module that limits current burns the excess as heat in its transistor; it needs a cool, flat, metal mounting.';
