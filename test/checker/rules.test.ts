@@ -196,6 +196,12 @@ describe('six-volt', () => {
   it('passes a 6 V coil on a 6 V system', () => {
     expect(verdict(checkSetup(six, pointsSetup({ coil: coil({ ratedVoltageV: 6, primaryResistanceOhm20C: { value: 1.5, provenance: 'catalogue' } }) })), 'six-volt')).toBe('pass');
   });
+  it('cautions a 6 V coil on a 12 V car kept safe only by the module current limit (common practice)', () => {
+    const sixVoltCoil = coil({ ratedVoltageV: 6, primaryResistanceOhm20C: { value: 1.4, provenance: 'catalogue' } });
+    const r = checkSetup(fourCylinder, moduleSetup(module(), { coil: sixVoltCoil, ballast: null }));
+    expect(verdict(r, 'six-volt')).toBe('caution');
+    expect(r.rules.find((x) => x.id === 'six-volt')!.why).toMatch(/limits the current/);
+  });
   it('uses 7.2 V running and 4.8 V cranking on 6 V (from memory)', () => {
     const r = checkSetup(six, pointsSetup());
     expect(r.circuit.runningSupplyV).toBeCloseTo(7.2, 6);

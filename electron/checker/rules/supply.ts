@@ -73,6 +73,19 @@ export const sixVolt: Rule = (ctx) => {
   if (coil.ratedVoltageV === 6 && setup.ballast === null && p.kind !== 'breakerless-current-limited' && p.kind !== 'capacitive-discharge') {
     return result(id, title, 'caution', figures, 'A 6 V coil on 12 V carries about twice its design current unless something limits it.', 'Fit a ballast or a current-limited module, or choose a 12 V coil.');
   }
+  if (coil.ratedVoltageV === 6 && setup.ballast === null && p.kind === 'breakerless-current-limited') {
+    // The module's limiter is then the only thing between the coil and twice its design current:
+    // common practice treats that as workable but fragile (a failed module or a roadside return to
+    // points leaves a 6 V coil on the full 12 V).
+    return result(
+      id,
+      title,
+      'caution',
+      figures,
+      'A 6 V coil on a 12 V car is safe here only because the module limits the current; if the module fails or the car goes back to points, the coil sees the full 12 V and overheats.',
+      'Choose a 12 V coil, or label the coil so that nobody runs it without this module or a ballast.',
+    );
+  }
   return result(id, title, 'pass', figures, 'A 12 V system: no 6 V limits apply.', 'Nothing to do.');
 };
 
