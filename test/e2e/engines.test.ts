@@ -5,46 +5,16 @@
  */
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { api, freshDir, openBrowser, projectRoot, removeFreshDirs, requireBrowserAndRenderer, screenshot, startHost, type Browser, type Host } from './harness.js';
+import { api, e2eSuite, freshDir, messageBeside, openApp, projectRoot, screenshot } from './harness.js';
 
 type Summary = { id: number; name: string; planCount: number };
 type StoredEngine = { id: number; name: string; boreMm: number; redlineRpm: number; idleRpm: number; existing: { plugGapMm: number }; pointsGapMm: number };
 
-const cleanups: Array<() => Promise<void>> = [];
-afterEach(async () => {
-  while (cleanups.length) await cleanups.pop()!().catch(() => {});
-});
-
-beforeAll(() => requireBrowserAndRenderer());
-afterAll(() => removeFreshDirs());
-
-async function startWorkshop(dataDir = freshDir('data')): Promise<{ host: Host; browser: Browser; page: Page }> {
-  const host = await startHost(dataDir);
-  cleanups.push(() => host.stop());
-  const browser = await openBrowser();
-  cleanups.push(() => browser.close());
-  await openApp(browser.page, host);
-  return { host, browser, page: browser.page };
-}
-
-async function openApp(page: Page, host: Host): Promise<void> {
-  await page.goto(host.url);
-  await page.getByRole('heading', { level: 1, name: 'Engines' }).waitFor();
-}
+const { startHost, startWorkshop } = e2eSuite();
 
 const engineTable = (page: Page) => page.getByRole('table', { name: 'Engines in this workshop' });
-
-/** The message shown beside a field must be the one the field is described by. */
-async function messageBeside(page: Page, label: string, fieldPath: string): Promise<string> {
-  const error = page.getByTestId(`error-${fieldPath}`);
-  await error.waitFor();
-  const [errorId, describedBy] = await Promise.all([error.getAttribute('id'), page.getByLabel(label, { exact: true }).getAttribute('aria-describedby')]);
-  expect(describedBy?.split(' ')).toContain(errorId);
-  expect(await page.getByLabel(label, { exact: true }).getAttribute('aria-invalid')).toBe('true');
-  return (await error.innerText()).replace(/^!\s*/, '').trim();
-}
 
 describe('the built page', () => {
   // The CSP (script-src 'self'; style-src 'self') refuses inline code, so none may be emitted.
@@ -204,7 +174,6 @@ describe('the engines screen', () => {
     // Restart the host on the same folder: a new token, a new browser, the same engine.
     await first.host.stop();
     const second = await startHost(dataDir);
-    cleanups.push(() => second.stop());
     await openApp(page, second);
     const row = page.getByTestId(`engine-row-${saved!.id}`);
     expect(await row.getByRole('rowheader').innerText()).toBe(name);

@@ -9,6 +9,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { afterAll, afterEach, beforeAll, expect } from 'vitest';
 
 export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 export const chromiumPath = '/usr/bin/chromium';
@@ -127,4 +128,61 @@ export async function openBrowser(): Promise<Browser> {
 
 export async function screenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: path.join(outputDir, `${name}.png`), fullPage: false });
+}
+
+export type Workshop = { host: Host; browser: Browser; page: Page };
+
+/**
+ * The lifecycle every end-to-end file shares; call it once at the top of the file. It fails the
+ * file early without Chromium or the build, closes each test's hosts and browsers after the test
+ * (last opened first), and removes the fresh folders when the file is done. Hosts and browsers
+ * started through it are closed that way.
+ */
+export function e2eSuite(): { startHost(dataDir: string): Promise<Host>; startWorkshop(dataDir?: string): Promise<Workshop> } {
+  const cleanups: Array<() => Promise<void>> = [];
+  afterEach(async () => {
+    while (cleanups.length) await cleanups.pop()!().catch(() => {});
+  });
+  beforeAll(() => requireBrowserAndRenderer());
+  afterAll(() => removeFreshDirs());
+
+  const trackedHost = async (dataDir: string): Promise<Host> => {
+    const host = await startHost(dataDir);
+    cleanups.push(() => host.stop());
+    return host;
+  };
+  return {
+    startHost: trackedHost,
+    /** A host on `dataDir` (a fresh folder by default) and a browser showing the app's first screen. */
+    async startWorkshop(dataDir = freshDir('data')): Promise<Workshop> {
+      const host = await trackedHost(dataDir);
+      const browser = await openBrowser();
+      cleanups.push(() => browser.close());
+      await openApp(browser.page, host);
+      return { host, browser, page: browser.page };
+    },
+  };
+}
+
+/** Loads the app from `host` and waits for the screen it opens on (the engines). */
+export async function openApp(page: Page, host: Host): Promise<void> {
+  await page.goto(host.url);
+  await page.getByRole('heading', { level: 1, name: 'Engines' }).waitFor();
+}
+
+/** Moves to a screen through the side list and waits for its heading. */
+export async function openScreen(page: Page, name: string): Promise<void> {
+  await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name }).click();
+  await page.getByRole('heading', { level: 1, name }).waitFor();
+}
+
+/** The message shown beside a field must be the one the field is described by. */
+export async function messageBeside(page: Page, label: string, fieldPath: string): Promise<string> {
+  const error = page.getByTestId(`error-${fieldPath}`);
+  await error.waitFor();
+  const field = page.getByLabel(label, { exact: true });
+  const [errorId, describedBy] = await Promise.all([error.getAttribute('id'), field.getAttribute('aria-describedby')]);
+  expect(describedBy?.split(' ')).toContain(errorId);
+  expect(await field.getAttribute('aria-invalid')).toBe('true');
+  return (await error.innerText()).replace(/^!\s*/, '').trim();
 }

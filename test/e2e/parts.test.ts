@@ -3,9 +3,9 @@
  * renderer, Debian's Chromium. What the page shows is checked against what the store answers on
  * its own API, and against the record on disk after the host is restarted.
  */
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { api, freshDir, openBrowser, removeFreshDirs, requireBrowserAndRenderer, screenshot, startHost, type Browser, type Host } from './harness.js';
+import { api, e2eSuite, freshDir, messageBeside, openApp, openScreen, screenshot, type Host, type Workshop } from './harness.js';
 
 type StoredPart = { id: number; kind: string; name: string; [field: string]: unknown };
 type StoredPlan = { id: number; name: string; moduleId: number | null; coilId: number | null; ballastId: number | null; tachId: number | null; leadsId: number | null; plugId: number | null };
@@ -22,39 +22,22 @@ const kindHeading: Record<(typeof kinds)[number], string> = {
   plug: 'Spark plugs',
 };
 
-const cleanups: Array<() => Promise<void>> = [];
-afterEach(async () => {
-  while (cleanups.length) await cleanups.pop()!().catch(() => {});
-});
-beforeAll(() => requireBrowserAndRenderer());
-afterAll(() => removeFreshDirs());
+const suite = e2eSuite();
 
-async function startWorkshop(dataDir = freshDir('data')): Promise<{ host: Host; browser: Browser; page: Page }> {
-  const host = await startHost(dataDir);
-  cleanups.push(() => host.stop());
-  const browser = await openBrowser();
-  cleanups.push(() => browser.close());
-  await openParts(browser.page, host);
-  return { host, browser, page: browser.page };
-}
-
-async function openParts(page: Page, host: Host): Promise<void> {
-  await page.goto(host.url);
-  await page.getByRole('heading', { level: 1, name: 'Engines' }).waitFor();
-  await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: 'Parts on the shelf' }).click();
-  await page.getByRole('heading', { level: 1, name: 'Parts on the shelf' }).waitFor();
+async function showParts(page: Page): Promise<void> {
+  await openScreen(page, 'Parts on the shelf');
   await page.getByTestId('parts-table-coil').waitFor();
 }
 
-/** The message shown beside a field must be the one the field is described by. */
-async function messageBeside(page: Page, label: string, fieldPath: string): Promise<string> {
-  const error = page.getByTestId(`error-${fieldPath}`);
-  await error.waitFor();
-  const field = page.getByLabel(label, { exact: true });
-  const [errorId, describedBy] = await Promise.all([error.getAttribute('id'), field.getAttribute('aria-describedby')]);
-  expect(describedBy?.split(' ')).toContain(errorId);
-  expect(await field.getAttribute('aria-invalid')).toBe('true');
-  return (await error.innerText()).replace(/^!\s*/, '').trim();
+async function openParts(page: Page, host: Host): Promise<void> {
+  await openApp(page, host);
+  await showParts(page);
+}
+
+async function startWorkshop(dataDir = freshDir('data')): Promise<Workshop> {
+  const workshop = await suite.startWorkshop(dataDir);
+  await showParts(workshop.page);
+  return workshop;
 }
 
 /** Every part id a plan or an engine's fitted ignition names, with who names it. */
@@ -182,8 +165,7 @@ describe('the parts screen', () => {
     await screenshot(page, 'part-editor-saved');
 
     await first.host.stop();
-    const second = await startHost(dataDir);
-    cleanups.push(() => second.stop());
+    const second = await suite.startHost(dataDir);
     await openParts(page, second);
     const row = page.getByTestId(`part-row-${saved!.id}`);
     expect(await row.getByRole('rowheader').innerText()).toContain(name);

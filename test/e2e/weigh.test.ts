@@ -3,11 +3,11 @@
  * loads the demo workshop), the built renderer and Debian's Chromium. What the page shows is
  * checked against what the host's own API answers for the same request.
  */
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import type { ComparisonAnswer, SearchAnswer } from '../../electron/ipc/channels.js';
 import { ignitionCautions } from '../../electron/safety/cautions.js';
-import { api, freshDir, openBrowser, removeFreshDirs, requireBrowserAndRenderer, screenshot, startHost, type Browser, type Host } from './harness.js';
+import { api, e2eSuite, freshDir, openScreen, screenshot, type Browser, type Host } from './harness.js';
 
 type Summary = { id: number; name: string };
 type Plan = { id: number; engineId: number; name: string; moduleId: number | null; coilId: number | null; ballastId: number | null; crankingBypass: boolean; plugGapMm: number };
@@ -17,23 +17,11 @@ const SALOON = 'Green four-door saloon';
 /** Our words for the verdicts, as the screen must show them (never colour alone). */
 const WORDS = { pass: 'Fine', caution: 'Take care', fail: 'Not like this' } as const;
 
-const cleanups: Array<() => Promise<void>> = [];
-afterEach(async () => {
-  while (cleanups.length) await cleanups.pop()!().catch(() => {});
-});
-beforeAll(() => requireBrowserAndRenderer());
-afterAll(() => removeFreshDirs());
+const { startWorkshop } = e2eSuite();
 
 async function openWeigh(): Promise<{ host: Host; browser: Browser; page: Page; saloon: Summary }> {
-  const host = await startHost(freshDir('weigh'));
-  cleanups.push(() => host.stop());
-  const browser = await openBrowser();
-  cleanups.push(() => browser.close());
-  const page = browser.page;
-  await page.goto(host.url);
-  await page.getByRole('heading', { level: 1, name: 'Engines' }).waitFor();
-  await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: 'Weigh a combination' }).click();
-  await page.getByRole('heading', { level: 1, name: 'Weigh a combination' }).waitFor();
+  const { host, browser, page } = await startWorkshop(freshDir('weigh'));
+  await openScreen(page, 'Weigh a combination');
   const saloon = (await api<Summary[]>(host, 'engines.list', {})).find((e) => e.name === SALOON)!;
   await page.getByLabel('Engine', { exact: true }).selectOption({ label: SALOON });
   await expect.poll(() => page.getByTestId('current-engine').innerText()).toContain(SALOON);

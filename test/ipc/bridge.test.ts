@@ -9,44 +9,14 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { demoEngines, demoParts, demoPlans } from '../../db/demo/index.js';
 import { STORE_FILE_NAME } from '../../db/location.js';
 import { SCHEMA_VERSION, closeStore, openStore } from '../../db/open.js';
-import { openBackend, type Backend } from '../../electron/ipc/backend.js';
-import { channels, type ChannelName, type Result } from '../../electron/ipc/channels.js';
+import { channels, type ChannelName } from '../../electron/ipc/channels.js';
 import { createDispatcher } from '../../electron/ipc/dispatch.js';
 import { createHandlers } from '../../electron/ipc/handlers.js';
-import { coilIn, engineIn, moduleIn, planIn, readingIn, tempDir } from '../db/samples.js';
+import { coilIn, engineIn, moduleIn, planIn, readingIn } from '../db/samples.js';
+import { backendPerTest } from './backend-per-test.js';
 
-let dir: string;
-let cleanup: () => void;
-let backend: Backend;
-let reader: Database.Database;
-
-beforeEach(() => {
-  ({ dir, cleanup } = tempDir('bridge'));
-  backend = openBackend({ dataDir: dir, host: 'browser', version: '0.1.0-test' });
-  reader = new Database(backend.storeFile, { readonly: true });
-});
-afterEach(() => {
-  reader.close();
-  backend.close();
-  cleanup();
-});
-
-function counts(): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const t of ['engines', 'advance_points', 'parts', 'plans', 'readings', 'meta']) {
-    out[t] = (reader.prepare(`SELECT COUNT(*) AS n FROM ${t}`).get() as { n: number }).n;
-  }
-  return out;
-}
-
-async function call(channel: unknown, payload: unknown): Promise<Result<any>> {
-  return backend.dispatch(channel, payload);
-}
-async function ok(channel: ChannelName, payload: unknown): Promise<any> {
-  const r = await call(channel, payload);
-  if (!r.ok) throw new Error(`${channel} failed: ${JSON.stringify(r.error)}`);
-  return r.value;
-}
+const store = backendPerTest('bridge');
+const { counts, call, ok } = store;
 
 /** One malformed payload per channel, and a field key the error must name ('_' = the whole request). */
 const malformed: Record<ChannelName, { payload: unknown; field: string }> = {
@@ -102,8 +72,8 @@ describe('unknown channels', () => {
 
 describe('happy paths', () => {
   it('reports the host, the data folder and the schema version', async () => {
-    expect(await ok('app.info', {})).toEqual({ version: '0.1.0-test', dataDir: dir, schemaVersion: SCHEMA_VERSION, host: 'browser' });
-    expect(backend.storeFile).toBe(join(dir, STORE_FILE_NAME));
+    expect(await ok('app.info', {})).toEqual({ version: '0.1.0-test', dataDir: store.dir, schemaVersion: SCHEMA_VERSION, host: 'browser' });
+    expect(store.backend.storeFile).toBe(join(store.dir, STORE_FILE_NAME));
   });
 
   it('opens a new data folder with the demo workshop, and loading it again adds nothing', async () => {
@@ -115,10 +85,7 @@ describe('happy paths', () => {
 
   it('does not reload the demo when the same folder is opened again after the user emptied it', async () => {
     for (const e of await ok('engines.list', {})) await ok('engines.delete', { id: e.id, deletePlansToo: true });
-    reader.close();
-    backend.close();
-    backend = openBackend({ dataDir: dir, host: 'desktop', version: '0.1.0-test' });
-    reader = new Database(backend.storeFile, { readonly: true });
+    store.reopen('desktop');
     expect(await ok('engines.list', {})).toEqual([]);
   });
 
@@ -155,7 +122,7 @@ describe('faults behind the bridge', () => {
   let file: string;
   let db: Database.Database;
   beforeEach(() => {
-    file = join(dir, 'second.sqlite3');
+    file = join(store.dir, 'second.sqlite3');
     db = openStore(file);
   });
   afterEach(() => closeStore(db));

@@ -4,44 +4,16 @@
  * second, read-only connection to the same file, so "nothing written" is checked on disk.
  */
 import Database from 'better-sqlite3';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { planInput, type Engine, type Part, type Plan } from '../../db/schema.js';
-import { openBackend, type Backend } from '../../electron/ipc/backend.js';
-import type { ComparisonAnswer, Result, SearchAnswer, ShownSetup } from '../../electron/ipc/channels.js';
+import type { ComparisonAnswer, SearchAnswer, ShownSetup } from '../../electron/ipc/channels.js';
 import { pickIndices } from '../../electron/ipc/check-view.js';
 import { ignitionCautions } from '../../electron/safety/cautions.js';
-import { engineIn, tempDir } from '../db/samples.js';
+import { engineIn } from '../db/samples.js';
+import { backendPerTest } from './backend-per-test.js';
 
-let dir: string;
-let cleanup: () => void;
-let backend: Backend;
-let reader: Database.Database;
-
-beforeEach(() => {
-  ({ dir, cleanup } = tempDir('check'));
-  backend = openBackend({ dataDir: dir, host: 'browser', version: '0.1.0-test' });
-  reader = new Database(backend.storeFile, { readonly: true });
-});
-afterEach(() => {
-  reader.close();
-  backend.close();
-  cleanup();
-});
-
-function counts(): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const t of ['engines', 'advance_points', 'parts', 'plans', 'readings', 'meta']) {
-    out[t] = (reader.prepare(`SELECT COUNT(*) AS n FROM ${t}`).get() as { n: number }).n;
-  }
-  return out;
-}
-
-const call = (channel: unknown, payload: unknown): Promise<Result<any>> => backend.dispatch(channel, payload);
-async function ok<T = any>(channel: string, payload: unknown): Promise<T> {
-  const r = await call(channel, payload);
-  if (!r.ok) throw new Error(`${channel} failed: ${JSON.stringify(r.error)}`);
-  return r.value as T;
-}
+const store = backendPerTest('check');
+const { counts, call, ok } = store;
 
 /** Every number anywhere in a value, with its path, so a failure names the culprit. */
 function numbersIn(value: unknown, path = '$', out: Array<[string, number]> = []): Array<[string, number]> {
@@ -246,7 +218,7 @@ describe('check.plans refusals', () => {
     const { plans } = await demo();
     const plan = plans.find((p) => p.coilId !== null)!;
     // Damage the plan's coil row on disk: the parts list then skips it (and says so on stderr).
-    const writer = new Database(backend.storeFile);
+    const writer = new Database(store.backend.storeFile);
     writer.prepare(`UPDATE parts SET data = json_set(data, '$.turnsRatio', 'many') WHERE id = ?`).run(plan.coilId);
     writer.close();
     const r = await call('check.plans', { engineId: plan.engineId, planIds: [plan.id] });

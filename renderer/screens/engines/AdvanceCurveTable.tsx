@@ -4,9 +4,10 @@
  * own message (path "advanceCurve.<row>.rpm").
  */
 import { useContext, useRef, type ReactNode } from 'react';
-import { FieldErrorsContext, fieldId, useTouchAfterEdit } from './fields.js';
+import { FieldErrorsContext, fieldId, useTouchAfterEdit } from '../../app/fields.js';
+import { Group } from '../../app/Group.js';
 import { nextRowKey, type EngineForm } from './form-model.js';
-import { Group, type Update } from './sections-engine.js';
+import type { Update } from './sections-engine.js';
 
 function Cell({ path, label, value, onChange }: { path: string; label: string; value: string; onChange: (v: string) => void }): ReactNode {
   const ctx = useContext(FieldErrorsContext);

@@ -5,14 +5,16 @@
 import { useEffect, useMemo, useRef, useState, type FormEvent, type ReactNode } from 'react';
 import type { Engine, Part, PartKind } from '../../../db/schema.js';
 import { call } from '../../app/bridge.js';
+import { CannotOpen, EditorStatus, UnsavedBadge } from '../../app/EditorStatus.js';
+import { FieldErrorsContext } from '../../app/fields.js';
+import { useFormSave, type SaveStatus } from '../../app/form-save.js';
+import { regap } from '../../app/gaps.js';
 import { useLeaveGuard } from '../../app/leave-guard.js';
-import { Notice } from '../../app/Notice.js';
 import type { Navigate } from '../../app/routes.js';
 import { useGapUnit } from '../../app/units.js';
 import { AdvanceCurveTable } from './AdvanceCurveTable.js';
 import { useDeleteEngine } from './delete-engine.js';
-import { FieldErrorsContext, fieldId, type FieldErrors } from './fields.js';
-import { blankForm, engineToForm, formFingerprint, formToInput, regap, serverFieldsToForm, type EngineForm } from './form-model.js';
+import { blankForm, engineToForm, formFingerprint, formToInput, type EngineForm } from './form-model.js';
 import { ElectricsSection, GeometrySection, IdentitySection, PointsSection, SpeedsSection } from './sections-engine.js';
 import { ConditionsSection, ExistingSection } from './sections-existing.js';
 
@@ -35,11 +37,7 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
   const [savedName, setSavedName] = useState('');
   const [loadProblem, setLoadProblem] = useState<string | null>(null);
   const [parts, setParts] = useState<Record<PartKind, Part[]>>(emptyParts);
-  const [touched, setTouched] = useState<Set<string>>(() => new Set());
-  const [submitted, setSubmitted] = useState(false);
-  const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
-  const [status, setStatus] = useState<{ kind: 'done' | 'problem'; text: string } | null>(null);
-  const [saving, setSaving] = useState(false);
+  const [status, setStatus] = useState<SaveStatus | null>(null);
   const headingRef = useRef<HTMLHeadingElement>(null);
 
   useEffect(() => {
@@ -77,13 +75,7 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
   useLeaveGuard(dirty, savedName ? `“${savedName}”` : 'This new engine');
 
   const clientErrors = check && !check.ok ? check.errors : {};
-  const errorsCtx = useMemo<FieldErrors>(
-    () => ({
-      message: (path) => ((submitted || touched.has(path)) && clientErrors[path]) || serverErrors[path],
-      touch: (path) => setTouched((t) => (t.has(path) ? t : new Set(t).add(path))),
-    }),
-    [clientErrors, serverErrors, submitted, touched],
-  );
+  const { errorsCtx, submitted, serverErrors, saving, save: saveForm, settle } = useFormSave(clientErrors, headingRef);
 
   const del = useDeleteEngine(
     (deletedId) => {
@@ -94,19 +86,7 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
     (message) => setStatus({ kind: 'problem', text: message }),
   );
 
-  if (loadProblem) {
-    return (
-      <section className="screen" aria-labelledby="editor-title">
-        <h1 id="editor-title" tabIndex={-1}>
-          Engine
-        </h1>
-        <Notice kind="problem">{loadProblem}</Notice>
-        <button type="button" onClick={() => navigate({ to: 'engines' })}>
-          Back to the engines
-        </button>
-      </section>
-    );
-  }
+  if (loadProblem) return <CannotOpen title="Engine" titleId="editor-title" problem={loadProblem} back={() => navigate({ to: 'engines' })} backLabel="Back to the engines" />;
   if (!form || !check) return <p className="quiet">Reading the engine…</p>;
 
   const update = (fn: (f: EngineForm) => EngineForm): void => {
@@ -114,49 +94,24 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
     setStatus((s) => (s?.kind === 'done' ? null : s));
   };
 
-  const focusFirstError = (errors: Record<string, string>): void => {
-    requestAnimationFrame(() => {
-      for (const path of Object.keys(errors)) {
-        const el = document.getElementById(fieldId(path));
-        if (el) {
-          // Centred, so the message under the field is not hidden behind the action bar.
-          el.focus({ preventScroll: true });
-          return el.scrollIntoView({ block: 'center' });
-        }
-      }
-      headingRef.current?.focus();
+  const save = (e?: FormEvent): Promise<void> =>
+    saveForm(e, check, {
+      what: 'this',
+      serverPrefix: 'engine',
+      send: (engine) => (engineId === null ? call('engines.create', { engine }) : call('engines.update', { id: engineId, engine })),
+      problem: (text) => setStatus({ kind: 'problem', text }),
+      saved: (engine) => {
+        // Show what the store now holds (it may have tidied the text) and take it as the clean state.
+        const savedForm = engineToForm(engine, unit);
+        setForm(savedForm);
+        setSavedPrint(formFingerprint(savedForm));
+        setSavedName(engine.name);
+        setEngineId(engine.id);
+        settle();
+        onOpened(engine);
+        setStatus({ kind: 'done', text: `Saved “${engine.name}”.` });
+      },
     });
-  };
-
-  const save = async (e?: FormEvent): Promise<void> => {
-    e?.preventDefault();
-    if (saving) return;
-    setSubmitted(true);
-    setServerErrors({});
-    if (!check.ok) {
-      setStatus({ kind: 'problem', text: 'Some values need correcting before this can be saved. Nothing has been saved yet.' });
-      return focusFirstError(check.errors);
-    }
-    setSaving(true);
-    const r = engineId === null ? await call('engines.create', { engine: check.input }) : await call('engines.update', { id: engineId, engine: check.input });
-    setSaving(false);
-    if (!r.ok) {
-      const fields = serverFieldsToForm(r.error.fields);
-      setServerErrors(fields);
-      setStatus({ kind: 'problem', text: `Not saved: ${r.error.message} Everything you typed is still here.` });
-      return focusFirstError(fields);
-    }
-    // Show what the store now holds (it may have tidied the text) and take it as the clean state.
-    const savedForm = engineToForm(r.value, unit);
-    setForm(savedForm);
-    setSavedPrint(formFingerprint(savedForm));
-    setSavedName(r.value.name);
-    setEngineId(r.value.id);
-    setSubmitted(false);
-    setTouched(new Set());
-    onOpened(r.value);
-    setStatus({ kind: 'done', text: `Saved “${r.value.name}”.` });
-  };
 
   const summary = status?.kind === 'problem' && submitted ? { ...clientErrors, ...serverErrors } : {};
   const title = engineId === null ? 'New engine' : savedName || 'Engine';
@@ -167,28 +122,9 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
         <h1 id="editor-title" ref={headingRef} tabIndex={-1}>
           {engineId === null ? title : `Engine: ${title}`}
         </h1>
-        {dirty ? (
-          <span className="badge" data-testid="unsaved">
-            <span aria-hidden="true">●</span> Unsaved changes
-          </span>
-        ) : null}
+        {dirty ? <UnsavedBadge testId="unsaved" /> : null}
       </div>
-      {status ? (
-        <Notice kind={status.kind} onDismiss={() => setStatus(null)} testId="editor-status">
-          {status.text}
-          {Object.keys(summary).length > 0 ? (
-            <ul className="error-summary">
-              {Object.entries(summary).map(([path, message]) => (
-                <li key={path}>
-                  <button type="button" className="link" onClick={() => document.getElementById(fieldId(path))?.focus()}>
-                    {message}
-                  </button>
-                </li>
-              ))}
-            </ul>
-          ) : null}
-        </Notice>
-      ) : null}
+      {status ? <EditorStatus status={status} summary={summary} onDismiss={() => setStatus(null)} /> : null}
       <FieldErrorsContext.Provider value={errorsCtx}>
         <form className="engine-form" onSubmit={(e) => void save(e)} noValidate aria-label={engineId === null ? 'New engine' : `Engine ${title}`}>
           <div className="groups">

@@ -1,33 +1,12 @@
 /** The engines in this workshop, with the facts a restorer picks one by, and add/open/delete. */
-import { useEffect, useState, type ReactNode } from 'react';
-import type { ResponseOf } from '../../../electron/ipc/channels.js';
-import { call } from '../../app/bridge.js';
-import { Notice } from '../../app/Notice.js';
+import type { ReactNode } from 'react';
+import { ActionsHead, ListNotices, RowActions, useListScreen } from '../../app/list-screen.js';
 import type { Navigate } from '../../app/routes.js';
 import { useDeleteEngine } from './delete-engine.js';
 import { earthWords } from './labels.js';
 
-type Summary = ResponseOf<'engines.list'>[number];
-
 export function EngineList({ navigate, version, onDeleted }: { navigate: Navigate; version: number; onDeleted: (id: number) => void }): ReactNode {
-  const [engines, setEngines] = useState<Summary[] | null>(null);
-  const [problem, setProblem] = useState<string | null>(null);
-  const [done, setDone] = useState<string | null>(null);
-  const [reload, setReload] = useState(0);
-
-  useEffect(() => {
-    let live = true;
-    void call('engines.list', {}).then((r) => {
-      if (!live) return;
-      if (r.ok) {
-        setEngines(r.value);
-        setProblem(null);
-      } else setProblem(r.error.message);
-    });
-    return () => {
-      live = false;
-    };
-  }, [version, reload]);
+  const { items: engines, setItems: setEngines, problem, setProblem, done, setDone, reload } = useListScreen('engines.list', {}, version);
 
   const del = useDeleteEngine(
     (id, plansDeleted) => {
@@ -36,7 +15,7 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
       setEngines((list) => list?.filter((e) => e.id !== id) ?? list);
       const name = engines?.find((e) => e.id === id)?.name ?? 'The engine';
       setDone(plansDeleted > 0 ? `${name} was deleted, with ${plansDeleted === 1 ? 'its plan' : `its ${plansDeleted} plans`}.` : `${name} was deleted.`);
-      setReload((n) => n + 1);
+      reload();
     },
     (message) => setProblem(message),
   );
@@ -51,16 +30,7 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
           Add an engine
         </button>
       </div>
-      {problem ? (
-        <Notice kind="problem" onDismiss={() => setProblem(null)}>
-          {problem}
-        </Notice>
-      ) : null}
-      {done ? (
-        <Notice kind="done" onDismiss={() => setDone(null)}>
-          {done}
-        </Notice>
-      ) : null}
+      <ListNotices problem={problem} done={done} onDismissProblem={() => setProblem(null)} onDismissDone={() => setDone(null)} />
       {engines === null && !problem ? <p className="quiet">Reading the workshop…</p> : null}
       {engines && engines.length === 0 ? (
         <p className="empty">No engines yet. Add one, or load the demo workshop to look around first.</p>
@@ -75,9 +45,7 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
               <th scope="col" className="num">System</th>
               <th scope="col">Earth</th>
               <th scope="col" className="num">Plans</th>
-              <th scope="col">
-                <span className="visually-hidden">Actions</span>
-              </th>
+              <ActionsHead />
             </tr>
           </thead>
           <tbody>
@@ -93,14 +61,7 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
                 <td className="num">{e.systemVoltageV} V</td>
                 <td>{earthWords(e.earthPolarity)}</td>
                 <td className="num">{e.planCount}</td>
-                <td className="actions">
-                  <button type="button" className="small" onClick={() => navigate({ to: 'engine', id: e.id })} aria-label={`Edit ${e.name}`}>
-                    Edit
-                  </button>
-                  <button type="button" className="small danger" onClick={() => del.ask({ id: e.id, name: e.name })} aria-label={`Delete ${e.name}`}>
-                    Delete
-                  </button>
-                </td>
+                <RowActions name={e.name} onEdit={() => navigate({ to: 'engine', id: e.id })} onDelete={() => del.ask({ id: e.id, name: e.name })} />
               </tr>
             ))}
           </tbody>

@@ -2,21 +2,13 @@
  * Deleting an engine, asking first. If the store answers IN_USE (plans are made for it), ask a
  * second time, saying how many plans would go with it, and only then send deletePlansToo.
  */
-import { useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { call } from '../../app/bridge.js';
+import { useDeleteSteps } from '../../app/delete-steps.js';
 import { Confirm } from '../../app/Dialog.js';
 
-type Stage = { step: 'ask' } | { step: 'plans'; count: number } | { step: 'closed' };
-
 export function useDeleteEngine(onDone: (id: number, plansDeleted: number) => void, onProblem: (message: string) => void) {
-  const [target, setTarget] = useState<{ id: number; name: string } | null>(null);
-  const [stage, setStage] = useState<Stage>({ step: 'closed' });
-  const [busy, setBusy] = useState(false);
-
-  const close = (): void => {
-    setStage({ step: 'closed' });
-    setTarget(null);
-  };
+  const { target, stage, setStage, busy, setBusy, close, ask } = useDeleteSteps<{ step: 'plans'; count: number }>();
 
   const send = async (deletePlansToo: boolean): Promise<void> => {
     if (!target) return;
@@ -69,11 +61,5 @@ export function useDeleteEngine(onDone: (id: number, plansDeleted: number) => vo
       </Confirm>
     ) : null;
 
-  return {
-    ask: (engine: { id: number; name: string }) => {
-      setTarget(engine);
-      setStage({ step: 'ask' });
-    },
-    dialog,
-  };
+  return { ask, dialog };
 }

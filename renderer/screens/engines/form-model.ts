@@ -6,10 +6,9 @@
  */
 import { engineInput, fieldMessages, type Engine, type EngineInput } from '../../../db/schema.js';
 import { numberToText, parseNumberText, parseOptionalNumberText } from '../../app/numbers.js';
-import { gapText, unitToMm, type GapUnit } from '../../app/units.js';
+import { gapFromMm, gapPrint, type GapValue } from '../../app/gaps.js';
+import type { GapUnit } from '../../app/units.js';
 
-/** A gap as typed, plus its exact value in mm (null while the text cannot be read). */
-export type GapValue = { text: string; mm: number | null };
 export type CurveRow = { key: number; rpm: string; advanceDeg: string };
 
 export type EngineForm = {
@@ -57,21 +56,6 @@ export type ConditionKey = (typeof conditionKeys)[number];
 
 let rowKey = 1;
 export const nextRowKey = (): number => rowKey++;
-
-export function gapFromMm(mm: number | null, unit: GapUnit): GapValue {
-  return { text: gapText(mm, unit), mm };
-}
-
-/** What the person typed into a gap box, read in the unit shown beside it. */
-export function gapFromText(text: string, unit: GapUnit): GapValue {
-  const p = parseNumberText(text, 'Gap');
-  return { text, mm: p.ok ? unitToMm(p.value, unit) : null };
-}
-
-/** Re-shows a gap in another unit without changing the stored millimetres. */
-export function regap(g: GapValue, unit: GapUnit): GapValue {
-  return g.mm === null ? g : { text: gapText(g.mm, unit), mm: g.mm };
-}
 
 const idText = (v: number | null): string => (v === null ? '' : String(v));
 
@@ -278,20 +262,12 @@ export function formToInput(f: EngineForm): FormCheck {
   return { ok: false, errors: { ...fromSchema, ...errors } };
 }
 
-/** Server field paths are relative to the request (`engine.boreMm`); the form's are not. */
-export function serverFieldsToForm(fields: Record<string, string> | undefined): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const [k, v] of Object.entries(fields ?? {})) out[k.replace(/^engine\./, '')] = v;
-  return out;
-}
-
 /** A fingerprint for "has anything changed?": gaps compared by their millimetres, not their text. */
 export function formFingerprint(f: EngineForm): string {
-  const g = (v: GapValue): string => (v.mm === null ? `text:${v.text}` : `mm:${v.mm}`);
   return JSON.stringify({
     ...f,
-    pointsGap: g(f.pointsGap),
+    pointsGap: gapPrint(f.pointsGap),
     advanceCurve: f.advanceCurve.map((r) => [r.rpm, r.advanceDeg]),
-    existing: { ...f.existing, plugGap: g(f.existing.plugGap) },
+    existing: { ...f.existing, plugGap: gapPrint(f.existing.plugGap) },
   });
 }

@@ -3,9 +3,11 @@
  * electrics and the contact-breaker settings.
  */
 import type { ReactNode } from 'react';
+import { NotesField, SelectField, TextField } from '../../app/fields.js';
+import { gapFromText } from '../../app/gaps.js';
+import { Group } from '../../app/Group.js';
 import { unitLabel, type GapUnit } from '../../app/units.js';
-import { NotesField, SelectField, TextField } from './fields.js';
-import { gapFromText, type EngineForm } from './form-model.js';
+import type { EngineForm } from './form-model.js';
 import { chargingChoices, cycleChoices, earthChoices, voltageChoices } from './labels.js';
 
 export type Update = (fn: (f: EngineForm) => EngineForm) => void;
@@ -13,15 +15,6 @@ type SectionProps = { form: EngineForm; update: Update; unit: GapUnit };
 
 type TopKey = { [K in keyof EngineForm]: EngineForm[K] extends string ? K : never }[keyof EngineForm];
 const setter = (update: Update, key: TopKey) => (v: string) => update((f) => ({ ...f, [key]: v }));
-
-export function Group({ title, children, id, full, fieldsClass }: { title: string; children: ReactNode; id: string; full?: boolean; fieldsClass?: string }): ReactNode {
-  return (
-    <fieldset className={`group${full ? ' full' : ''}`} id={id} aria-labelledby={`${id}-title`}>
-      <legend id={`${id}-title`}>{title}</legend>
-      <div className={`group-fields${fieldsClass ? ` ${fieldsClass}` : ''}`}>{children}</div>
-    </fieldset>
-  );
-}
 
 export function IdentitySection({ form, update }: SectionProps): ReactNode {
   return (

@@ -4,11 +4,13 @@
  */
 import { useContext, useEffect, useState, type ReactNode } from 'react';
 import type { Part, PartKind } from '../../../db/schema.js';
+import { CheckField, FieldErrorsContext, PartPicker, SelectField, TextField } from '../../app/fields.js';
+import { gapFromText } from '../../app/gaps.js';
+import { Group } from '../../app/Group.js';
 import { unitLabel, type GapUnit } from '../../app/units.js';
-import { CheckField, FieldErrorsContext, PartPicker, SelectField, TextField } from './fields.js';
-import { conditionKeys, gapFromText, type ConditionKey, type EngineForm } from './form-model.js';
+import { conditionKeys, type ConditionKey, type EngineForm } from './form-model.js';
 import { ballastChoices, triggerChoices } from './labels.js';
-import { Group, type Update } from './sections-engine.js';
+import type { Update } from './sections-engine.js';
 
 type Existing = EngineForm['existing'];
 type Props = { form: EngineForm; update: Update; unit: GapUnit; parts: Record<PartKind, Part[]> };

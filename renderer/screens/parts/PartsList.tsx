@@ -2,10 +2,9 @@
  * The parts on the shelf, grouped by kind, with each kind's key figures in workshop units and
  * add/edit/delete. A filter shows one kind at a time; it is remembered for this window.
  */
-import { useEffect, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { partKinds, type Part, type PartKind } from '../../../db/schema.js';
-import { call } from '../../app/bridge.js';
-import { Notice } from '../../app/Notice.js';
+import { ListNotices, useListScreen } from '../../app/list-screen.js';
 import type { Navigate } from '../../app/routes.js';
 import { useGapUnit } from '../../app/units.js';
 import { useDeletePart } from './delete-part.js';
@@ -17,30 +16,13 @@ type Props = { navigate: Navigate; version: number };
 
 export function PartsList({ navigate, version }: Props): ReactNode {
   const [unit] = useGapUnit();
-  const [parts, setParts] = useState<Part[] | null>(null);
-  const [problem, setProblem] = useState<string | null>(null);
-  const [done, setDone] = useState<string | null>(null);
+  const { items: parts, setItems: setParts, problem, setProblem, done, setDone, reload } = useListScreen('parts.list', {}, version);
   const [shown, setShownState] = useState<Shown>(loadShown);
-  const [reload, setReload] = useState(0);
-
-  useEffect(() => {
-    let live = true;
-    void call('parts.list', {}).then((r) => {
-      if (!live) return;
-      if (r.ok) {
-        setParts(r.value);
-        setProblem(null);
-      } else setProblem(r.error.message);
-    });
-    return () => {
-      live = false;
-    };
-  }, [version, reload]);
 
   const del = useDeletePart((target) => {
     setParts((list) => list?.filter((p) => p.id !== target.id) ?? list);
     setDone(`${target.name} was deleted.`);
-    setReload((n) => n + 1);
+    reload();
   });
 
   const setShown = (v: Shown): void => {
@@ -62,16 +44,7 @@ export function PartsList({ navigate, version }: Props): ReactNode {
           Add a part
         </button>
       </div>
-      {problem ? (
-        <Notice kind="problem" onDismiss={() => setProblem(null)}>
-          {problem}
-        </Notice>
-      ) : null}
-      {done ? (
-        <Notice kind="done" onDismiss={() => setDone(null)} testId="parts-done">
-          {done}
-        </Notice>
-      ) : null}
+      <ListNotices problem={problem} done={done} onDismissProblem={() => setProblem(null)} onDismissDone={() => setDone(null)} doneTestId="parts-done" />
       <fieldset className="kind-filter">
         <legend>Show</legend>
         <label>

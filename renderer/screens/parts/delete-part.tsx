@@ -3,22 +3,13 @@
  * refused by the store (IN_USE) with a sentence saying who uses it; that sentence is shown in a
  * second dialog, and nothing is removed.
  */
-import { useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { call } from '../../app/bridge.js';
+import { useDeleteSteps, type DeleteTarget } from '../../app/delete-steps.js';
 import { Confirm, Dialog } from '../../app/Dialog.js';
 
-type Target = { id: number; name: string };
-type Stage = { step: 'ask' } | { step: 'refused'; message: string; inUse: boolean } | { step: 'closed' };
-
-export function useDeletePart(onDone: (target: Target) => void) {
-  const [target, setTarget] = useState<Target | null>(null);
-  const [stage, setStage] = useState<Stage>({ step: 'closed' });
-  const [busy, setBusy] = useState(false);
-
-  const close = (): void => {
-    setStage({ step: 'closed' });
-    setTarget(null);
-  };
+export function useDeletePart(onDone: (target: DeleteTarget) => void) {
+  const { target, stage, setStage, busy, setBusy, close, ask } = useDeleteSteps<{ step: 'refused'; message: string; inUse: boolean }>();
 
   const send = async (): Promise<void> => {
     if (!target) return;
@@ -62,11 +53,5 @@ export function useDeletePart(onDone: (target: Target) => void) {
       </Dialog>
     ) : null;
 
-  return {
-    ask: (part: Target) => {
-      setTarget(part);
-      setStage({ step: 'ask' });
-    },
-    dialog,
-  };
+  return { ask, dialog };
 }

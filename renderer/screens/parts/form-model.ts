@@ -8,7 +8,7 @@
 import { partInput, type Ballast, type IgnitionModule, type Leads, type Part, type PartInput, type PartKind, type Tach } from '../../../db/schema.js';
 import { numberToText, parseNumberText } from '../../app/numbers.js';
 import type { GapUnit } from '../../app/units.js';
-import { gapFromMm, regap, type GapValue } from '../engines/form-model.js';
+import { gapFromMm, gapPrint, regap, type GapValue } from '../../app/gaps.js';
 import { fieldSpecs, plainMessage, toStored, toTyped } from './field-specs.js';
 
 export type PartForm = {
@@ -276,16 +276,8 @@ export function formToInput(f: PartForm, unit: GapUnit): FormCheck {
   return { ok: false, errors: { ...fromSchema, ...errors } };
 }
 
-/** Server field paths are relative to the request (`part.primaryInductanceH`); the form's are not. */
-export function serverFieldsToForm(fields: Record<string, string> | undefined): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const [k, v] of Object.entries(fields ?? {})) out[k.replace(/^part\./, '')] = v;
-  return out;
-}
-
 /** "Has anything changed?": only the chosen kind's fields count, and gaps by their millimetres. */
 export function formFingerprint(f: PartForm): string {
-  const g = (v: GapValue): string => (v.mm === null ? `text:${v.text}` : `mm:${v.mm}`);
-  const own = f.kind === 'plug' ? { ...f.plug, gapMin: g(f.plug.gapMin), gapMax: g(f.plug.gapMax) } : f[f.kind];
+  const own = f.kind === 'plug' ? { ...f.plug, gapMin: gapPrint(f.plug.gapMin), gapMax: gapPrint(f.plug.gapMax) } : f[f.kind];
   return JSON.stringify({ kind: f.kind, name: f.name, notes: f.notes, own });
 }

@@ -1,6 +1,7 @@
 /** One table per kind of part, each with the columns a restorer compares that kind by. */
 import type { ReactNode } from 'react';
 import type { Part, PartKind } from '../../../db/schema.js';
+import { ActionsHead, RowActions } from '../../app/list-screen.js';
 import type { GapUnit } from '../../app/units.js';
 import { ballastFigures, coilFigures, leadsFigures, moduleFigures, plugFigures, tachFigures } from './figures.js';
 import { kindWords } from './labels.js';
@@ -61,9 +62,7 @@ export function KindTable<K extends PartKind>({ kind, parts, unit, onEdit, onDel
               {c.head}
             </th>
           ))}
-          <th scope="col">
-            <span className="visually-hidden">Actions</span>
-          </th>
+          <ActionsHead />
         </tr>
       </thead>
       <tbody>
@@ -80,14 +79,7 @@ export function KindTable<K extends PartKind>({ kind, parts, unit, onEdit, onDel
                 {c.cell(p as Of<K>, unit)}
               </td>
             ))}
-            <td className="actions">
-              <button type="button" className="small" onClick={() => onEdit(p)} aria-label={`Edit ${p.name}`}>
-                Edit
-              </button>
-              <button type="button" className="small danger" onClick={() => onDelete(p)} aria-label={`Delete ${p.name}`}>
-                Delete
-              </button>
-            </td>
+            <RowActions name={p.name} onEdit={() => onEdit(p)} onDelete={() => onDelete(p)} />
           </tr>
         ))}
       </tbody>

@@ -3,10 +3,10 @@
  * the unit it is typed in; the module's dwell and CD fields appear only for the type that has them.
  */
 import { useContext, type ReactNode } from 'react';
+import { CheckField, FieldErrorsContext, fieldId, NotesField, SelectField, TextField } from '../../app/fields.js';
+import { gapFromText } from '../../app/gaps.js';
+import { Group } from '../../app/Group.js';
 import { unitLabel, type GapUnit } from '../../app/units.js';
-import { CheckField, FieldErrorsContext, fieldId, NotesField, SelectField, TextField } from '../engines/fields.js';
-import { gapFromText } from '../engines/form-model.js';
-import { Group } from '../engines/sections-engine.js';
 import type { PartForm } from './form-model.js';
 import { ballastTypeChoices, coreChoices, kindChoices, moduleTypeChoices, ratedVoltageChoices, sensesChoices } from './labels.js';
 

@@ -6,10 +6,13 @@
 import { useContext, useEffect, useMemo, useRef, useState, type FormEvent, type ReactNode } from 'react';
 import type { Engine, Part, PartKind, Plan, PlanStatus } from '../../../db/schema.js';
 import { call } from '../../app/bridge.js';
+import { UnsavedBadge } from '../../app/EditorStatus.js';
+import { CheckField, FieldErrorsContext, fieldId, NotesField, SelectField, TextField } from '../../app/fields.js';
+import { useFormSave } from '../../app/form-save.js';
+import { gapFromText, regap } from '../../app/gaps.js';
 import { Notice } from '../../app/Notice.js';
 import { unitLabel, useGapUnit } from '../../app/units.js';
-import { CheckField, FieldErrorsContext, fieldId, NotesField, SelectField, TextField, type FieldErrors } from '../engines/fields.js';
-import { formToPlanInput, gapFromText, planFingerprint, regap, serverFieldsToPlanForm, type PlanForm } from './plan-form.js';
+import { formToPlanInput, planFingerprint, type PlanForm } from './plan-form.js';
 import { feedChoices } from './words.js';
 
 type Props = {
@@ -26,6 +29,9 @@ type Props = {
   onDirty: (dirty: boolean, name: string) => void;
 };
 
+/** In the order the fields appear, so focus lands on the first one a person would read. */
+const fieldOrder = ['name', 'moduleId', 'coilId', 'ballastId', 'crankingBypass', 'moduleFeed', 'tachId', 'leadsId', 'plugId', 'plugGapMm', 'notes'];
+
 const nameOf = (parts: readonly Part[], id: number | null): string | null => (id === null ? null : (parts.find((p) => p.id === id)?.name ?? `part no. ${id}`));
 
 function choicesOf(parts: readonly Part[], none: string, value: string): Array<{ value: string; label: string }> {
@@ -38,11 +44,7 @@ export function PlanEditor({ engine, parts, initial, planId, status, startsDirty
   const [unit] = useGapUnit();
   const [form, setForm] = useState<PlanForm>(initial);
   const [savedPrint, setSavedPrint] = useState(() => (startsDirty ? '' : planFingerprint(initial)));
-  const [touched, setTouched] = useState<Set<string>>(() => new Set());
-  const [submitted, setSubmitted] = useState(false);
-  const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [problem, setProblem] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
   const headingRef = useRef<HTMLHeadingElement>(null);
 
   useEffect(() => {
@@ -55,56 +57,24 @@ export function PlanEditor({ engine, parts, initial, planId, status, startsDirty
 
   const check = useMemo(() => formToPlanInput(form, engine.id, status), [form, engine.id, status]);
   const clientErrors = check.ok ? {} : check.errors;
-  const errorsCtx = useMemo<FieldErrors>(
-    () => ({
-      message: (path) => ((submitted || touched.has(path)) && clientErrors[path]) || serverErrors[path],
-      touch: (path) => setTouched((t) => (t.has(path) ? t : new Set(t).add(path))),
-    }),
-    [clientErrors, serverErrors, submitted, touched],
-  );
+  const { errorsCtx, submitted, serverErrors, saving, save: saveForm } = useFormSave(clientErrors, headingRef, fieldOrder);
 
   const set = (patch: Partial<PlanForm>): void => setForm((f) => ({ ...f, ...patch }));
   const text = (key: 'name' | 'notes' | 'moduleId' | 'coilId' | 'tachId' | 'leadsId' | 'plugId') => (v: string) => set({ [key]: v } as Partial<PlanForm>);
 
-  const focusFirst = (errors: Record<string, string>): void => {
-    requestAnimationFrame(() => {
-      // In the order the fields appear, so focus lands on the first one a person would read.
-      const order = ['name', 'moduleId', 'coilId', 'ballastId', 'crankingBypass', 'moduleFeed', 'tachId', 'leadsId', 'plugId', 'plugGapMm', 'notes'];
-      const paths = Object.keys(errors).sort((a, b) => (order.indexOf(a) + 1 || 99) - (order.indexOf(b) + 1 || 99));
-      for (const path of paths) {
-        const el = document.getElementById(fieldId(path)) ?? document.querySelector<HTMLElement>(`[name="${path}"]`);
-        if (el) {
-          el.focus({ preventScroll: true });
-          return el.scrollIntoView({ block: 'center' });
-        }
-      }
-      headingRef.current?.focus();
+  const save = (e?: FormEvent): Promise<void> =>
+    saveForm(e, check, {
+      what: 'this plan',
+      serverPrefix: 'plan',
+      send: (plan) => (planId === null ? call('plans.create', { plan }) : call('plans.update', { id: planId, plan })),
+      problem: setProblem,
+      saved: (plan) => {
+        setProblem(null);
+        setSavedPrint(planFingerprint(form));
+        onDirty(false, '');
+        onSaved(plan, planId === null);
+      },
     });
-  };
-
-  const save = async (e?: FormEvent): Promise<void> => {
-    e?.preventDefault();
-    if (saving) return;
-    setSubmitted(true);
-    setServerErrors({});
-    if (!check.ok) {
-      setProblem('Some values need correcting before this plan can be saved. Nothing has been saved yet.');
-      return focusFirst(check.errors);
-    }
-    setSaving(true);
-    const r = planId === null ? await call('plans.create', { plan: check.input }) : await call('plans.update', { id: planId, plan: check.input });
-    setSaving(false);
-    if (!r.ok) {
-      const fields = serverFieldsToPlanForm(r.error.fields);
-      setServerErrors(fields);
-      setProblem(`Not saved: ${r.error.message} Everything you typed is still here.`);
-      return focusFirst(fields);
-    }
-    setProblem(null);
-    setSavedPrint(planFingerprint(form));
-    onDirty(false, '');
-    onSaved(r.value, planId === null);
-  };
 
   const existing = engine.existing;
   const keep = (kind: PartKind, id: number | null): string => {
@@ -120,11 +90,7 @@ export function PlanEditor({ engine, parts, initial, planId, status, startsDirty
         <h2 id="plan-editor-title" ref={headingRef} tabIndex={-1}>
           {planId === null ? 'New plan' : `Change the plan “${initial.name}”`}
         </h2>
-        {dirty ? (
-          <span className="badge" data-testid="plan-unsaved">
-            <span aria-hidden="true">●</span> Unsaved changes
-          </span>
-        ) : null}
+        {dirty ? <UnsavedBadge testId="plan-unsaved" /> : null}
       </div>
       {problem ? (
         <Notice kind="problem" onDismiss={() => setProblem(null)} testId="plan-status">

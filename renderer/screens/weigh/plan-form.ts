@@ -6,9 +6,8 @@
 import { fieldMessages, planInput, type Engine, type Plan, type PlanInput, type PlanStatus } from '../../../db/schema.js';
 import type { ShelfSuggestion } from '../../../electron/ipc/channels.js';
 import { numberToText, parseNumberText } from '../../app/numbers.js';
-import { gapText, unitToMm, type GapUnit } from '../../app/units.js';
-
-export type GapValue = { text: string; mm: number | null };
+import { gapFromMm, type GapValue } from '../../app/gaps.js';
+import type { GapUnit } from '../../app/units.js';
 
 export type PlanForm = {
   name: string;
@@ -27,17 +26,6 @@ export type PlanForm = {
 const idText = (v: number | null): string => (v === null ? '' : String(v));
 const idOf = (t: string): number | null => (t.trim() === '' ? null : Number(t));
 
-export function gapFromText(text: string, unit: GapUnit): GapValue {
-  const p = parseNumberText(text, 'Plug gap');
-  return { text, mm: p.ok ? unitToMm(p.value, unit) : null };
-}
-
-export function regap(g: GapValue, unit: GapUnit): GapValue {
-  return g.mm === null ? g : { text: gapText(g.mm, unit), mm: g.mm };
-}
-
-const gapOf = (mm: number, unit: GapUnit): GapValue => ({ text: gapText(mm, unit), mm });
-
 /** A new plan keeps everything the engine has today; the person picks what changes. */
 export function blankPlanForm(engine: Engine, unit: GapUnit): PlanForm {
   return {
@@ -51,7 +39,7 @@ export function blankPlanForm(engine: Engine, unit: GapUnit): PlanForm {
     tachId: '',
     leadsId: '',
     plugId: '',
-    plugGap: gapOf(engine.existing.plugGapMm, unit),
+    plugGap: gapFromMm(engine.existing.plugGapMm, unit),
   };
 }
 
@@ -67,7 +55,7 @@ export function planToForm(p: Plan, unit: GapUnit): PlanForm {
     tachId: idText(p.tachId),
     leadsId: idText(p.leadsId),
     plugId: idText(p.plugId),
-    plugGap: gapOf(p.plugGapMm, unit),
+    plugGap: gapFromMm(p.plugGapMm, unit),
   };
 }
 
@@ -81,7 +69,7 @@ export function suggestionToForm(s: ShelfSuggestion, engine: Engine, unit: GapUn
     coilId: String(s.coilId),
     ballastId: idText(s.ballastId),
     crankingBypass: s.ballastId !== null && s.crankingBypass,
-    plugGap: gapOf(s.setup.plugGapMm, unit),
+    plugGap: gapFromMm(s.setup.plugGapMm, unit),
   };
 }
 
@@ -113,13 +101,6 @@ export function formToPlanInput(f: PlanForm, engineId: number, status: PlanStatu
   }
   if (Object.keys(errors).length > 0 || !parsed.success) return { ok: false, errors };
   return { ok: true, input: parsed.data };
-}
-
-/** Field keys from the store come as `plan.coilId`; the form's are `coilId`. */
-export function serverFieldsToPlanForm(fields: Record<string, string> | undefined): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const [k, v] of Object.entries(fields ?? {})) out[k.replace(/^plan\./, '')] = v;
-  return out;
 }
 
 /** For "has anything changed?": the gap compared by its millimetres, not its text. */

@@ -1,10 +1,10 @@
 /**
- * Small labelled inputs for the engine form. Each takes the schema path it edits, shows its
+ * Small labelled inputs for every form (engines, parts, plans). Each takes the schema path it edits, shows its
  * unit in the label, and shows the message for that path right beside it (linked with
  * aria-describedby so a screen reader reads it with the field).
  */
 import { createContext, useContext, useRef, type ReactNode } from 'react';
-import type { Part } from '../../../db/schema.js';
+import type { Part } from '../../db/schema.js';
 
 export type FieldErrors = { message(path: string): string | undefined; touch(path: string): void };
 export const FieldErrorsContext = createContext<FieldErrors>({ message: () => undefined, touch: () => {} });

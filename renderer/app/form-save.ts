@@ -1,0 +1,98 @@
+/**
+ * The save mechanics every editor shares (engines, parts, plans). A field's message shows once the
+ * person has touched it or tried to save; a save the form's own check refuses sends nothing; a
+ * refusal from the store puts its field messages beside the fields. Either way focus moves to the
+ * first field named (or to the heading) and everything typed stays in the form.
+ */
+import { useMemo, useState, type FormEvent, type RefObject } from 'react';
+import type { Result } from '../../electron/ipc/channels.js';
+import { fieldId, type FieldErrors } from './fields.js';
+
+export type Messages = Record<string, string>;
+/** What a form's own check answers: the input ready to send, or messages keyed by schema path. */
+export type Checked<I> = { ok: true; input: I } | { ok: false; errors: Messages };
+/** The editor's status line. */
+export type SaveStatus = { kind: 'done' | 'problem'; text: string };
+
+/** Field keys from the store are relative to the request (`engine.boreMm`); the form's are not. */
+export function withoutPrefix(fields: Messages | undefined, prefix: string): Messages {
+  const out: Messages = {};
+  for (const [k, v] of Object.entries(fields ?? {})) out[k.startsWith(`${prefix}.`) ? k.slice(prefix.length + 1) : k] = v;
+  return out;
+}
+
+/**
+ * Focuses the first field with a message, after the next paint (the message has to be there
+ * first). `order` lists paths in the order they appear, where the messages' own order would not
+ * be the reading order. With none of the fields on screen, the heading takes focus.
+ */
+export function focusFirstError(errors: Messages, heading: RefObject<HTMLElement | null>, order: readonly string[] = []): void {
+  requestAnimationFrame(() => {
+    const rank = (path: string): number => order.indexOf(path) + 1 || 99;
+    const paths = order.length > 0 ? Object.keys(errors).sort((a, b) => rank(a) - rank(b)) : Object.keys(errors);
+    for (const path of paths) {
+      const el = document.getElementById(fieldId(path)) ?? document.querySelector<HTMLElement>(`[name="${path}"]`);
+      if (el) {
+        // Centred, so the message under the field is not hidden behind the action bar.
+        el.focus({ preventScroll: true });
+        return el.scrollIntoView({ block: 'center' });
+      }
+    }
+    heading.current?.focus();
+  });
+}
+
+type SaveSteps<I, V> = {
+  /** Names what is saved in the "needs correcting" sentence: "this", "this plan". */
+  what: string;
+  /** The request's key for the form's fields in the store's answer: "engine", "part", "plan". */
+  serverPrefix: string;
+  send: (input: I) => Promise<Result<V>>;
+  /** Shows a problem sentence in the editor's status line. */
+  problem: (text: string) => void;
+  saved: (value: V) => void;
+};
+
+export function useFormSave(clientErrors: Messages, heading: RefObject<HTMLElement | null>, order?: readonly string[]) {
+  const [touched, setTouched] = useState<Set<string>>(() => new Set());
+  const [submitted, setSubmitted] = useState(false);
+  const [serverErrors, setServerErrors] = useState<Messages>({});
+  const [saving, setSaving] = useState(false);
+
+  const errorsCtx = useMemo<FieldErrors>(
+    () => ({
+      message: (path) => ((submitted || touched.has(path)) && clientErrors[path]) || serverErrors[path],
+      touch: (path) => setTouched((t) => (t.has(path) ? t : new Set(t).add(path))),
+    }),
+    [clientErrors, serverErrors, submitted, touched],
+  );
+
+  const save = async <I, V>(e: FormEvent | undefined, check: Checked<I>, steps: SaveSteps<I, V>): Promise<void> => {
+    e?.preventDefault();
+    if (saving) return;
+    setSubmitted(true);
+    setServerErrors({});
+    if (!check.ok) {
+      steps.problem(`Some values need correcting before ${steps.what} can be saved. Nothing has been saved yet.`);
+      return focusFirstError(check.errors, heading, order);
+    }
+    setSaving(true);
+    const r = await steps.send(check.input);
+    setSaving(false);
+    if (!r.ok) {
+      const fields = withoutPrefix(r.error.fields, steps.serverPrefix);
+      setServerErrors(fields);
+      steps.problem(`Not saved: ${r.error.message} Everything you typed is still here.`);
+      return focusFirstError(fields, heading, order);
+    }
+    steps.saved(r.value);
+  };
+
+  /** After a save: what is on screen is now the clean state, so no message shows until touched again. */
+  const settle = (): void => {
+    setSubmitted(false);
+    setTouched(new Set());
+  };
+
+  return { errorsCtx, submitted, serverErrors, setServerErrors, saving, save, settle };
+}
