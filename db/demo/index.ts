@@ -3,3 +3,4 @@ export { loadDemo, loadDemoIfFirstRun, DEMO_FLAG, type DemoCounts } from './load
 export { demoParts } from './parts.js';
 export { demoEngines, DEMO_WORKSHOP_NAME, type DemoEngine } from './engines.js';
 export { demoPlans, type DemoPlan } from './plans.js';
+export { resolveDemoEngine, resolveDemoPlan, type PartRef } from './resolve.js';

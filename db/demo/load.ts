@@ -11,9 +11,10 @@
  */
 import type { Part, PartKind } from '../schema.js';
 import type { Repositories } from '../repositories/index.js';
-import { demoEngines, type DemoEngine } from './engines.js';
+import { demoEngines } from './engines.js';
 import { demoParts } from './parts.js';
 import { demoPlans } from './plans.js';
+import { resolveDemoEngine, resolveDemoPlan, type PartRef } from './resolve.js';
 
 export const DEMO_FLAG = 'demo_loaded';
 
@@ -32,7 +33,7 @@ export function loadDemo(repos: Repositories): DemoCounts {
       }
       partIds.set(key(p.kind, p.name), stored.id);
     }
-    const ref = (kind: PartKind, name: string | null): number | null => {
+    const ref: PartRef = (kind, name) => {
       if (name === null) return null;
       const found = partIds.get(key(kind, name));
       if (found === undefined) throw new Error(`Demo data names a ${kind} "${name}" that is not in the demo parts bin.`);
@@ -44,28 +45,20 @@ export function loadDemo(repos: Repositories): DemoCounts {
     for (const e of demoEngines) {
       let id = existingEngines.get(e.name);
       if (id === undefined) {
-        id = repos.engines.create(resolveEngine(e, ref)).id;
+        id = repos.engines.create(resolveDemoEngine(e, ref)).id;
         counts.enginesAdded++;
       }
       engineIds.set(e.name, id);
     }
 
-    for (const { engine, module, coil, ballast, tach, leads, plug, readings, ...rest } of demoPlans) {
-      const engineId = engineIds.get(engine);
-      if (engineId === undefined) throw new Error(`Demo plan "${rest.name}" names an engine "${engine}" that is not in the demo.`);
-      if (repos.plans.list(engineId).some((p) => p.name === rest.name)) continue;
-      const plan = repos.plans.create({
-        ...rest,
-        engineId,
-        moduleId: ref('module', module),
-        coilId: ref('coil', coil),
-        ballastId: ref('ballast', ballast),
-        tachId: ref('tach', tach),
-        leadsId: ref('leads', leads),
-        plugId: ref('plug', plug),
-      });
+    for (const demoPlan of demoPlans) {
+      const engineId = engineIds.get(demoPlan.engine);
+      if (engineId === undefined) throw new Error(`Demo plan "${demoPlan.name}" names an engine "${demoPlan.engine}" that is not in the demo.`);
+      if (repos.plans.list(engineId).some((p) => p.name === demoPlan.name)) continue;
+      const { plan, readings } = resolveDemoPlan(demoPlan, engineId, ref);
+      const stored = repos.plans.create(plan);
       counts.plansAdded++;
-      for (const r of readings) repos.readings.add({ ...r, planId: plan.id });
+      for (const r of readings) repos.readings.add({ ...r, planId: stored.id });
     }
 
     repos.meta.set(DEMO_FLAG, `loaded ${new Date().toISOString()}`);
@@ -88,19 +81,4 @@ export function loadDemoIfFirstRun(repos: Repositories): DemoCounts | null {
 
 function key(kind: PartKind, name: string): string {
   return `${kind}\u0000${name.trim()}`;
-}
-
-function resolveEngine(e: DemoEngine, ref: (kind: PartKind, name: string | null) => number | null) {
-  const { coilPart, ballastPart, tachPart, leadsPart, plugPart, ...existing } = e.existing;
-  return {
-    ...e,
-    existing: {
-      ...existing,
-      coilPartId: ref('coil', coilPart),
-      ballastPartId: ref('ballast', ballastPart),
-      tachPartId: ref('tach', tachPart),
-      leadsPartId: ref('leads', leadsPart),
-      plugPartId: ref('plug', plugPart),
-    },
-  };
 }

@@ -12,6 +12,9 @@ import { CliError } from './errors.js';
 import { toJson } from './output.js';
 import { readBinFile, readPlanFile, type Workshop } from './plan-file.js';
 
+/** The workshop cautions, printed with every report that says what to change on the ignition. */
+const cautions = ignitionCautions.map((c) => c.text);
+
 /** Read and parse a JSON file, refusing a missing file or bad JSON with a plain sentence. */
 export function readJsonFile(path: string): unknown {
   let text: string;
@@ -69,8 +72,7 @@ export function checkCommand(args: ParsedArgs): string {
       rows: report.rows,
       existing: trimReport(report.existing, sweep),
       candidates: report.candidates.map((c) => trimReport(c, sweep)),
-      // The report says what to change on the ignition, so the workshop cautions go with it.
-      cautions: ignitionCautions.map((c) => c.text),
+      cautions,
     });
   });
 }
@@ -102,7 +104,7 @@ export function searchCommand(args: ParsedArgs): string {
         keyPoints: c.report.keyPoints,
         rules: c.report.rules,
       })),
-      cautions: ignitionCautions.map((c) => c.text),
+      cautions,
     });
   });
 }
