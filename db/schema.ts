@@ -267,28 +267,219 @@ export const planFields = z.object({
 export const planInput = planFields;
 export const plan = planFields.extend({ id, updatedAt: z.string() });
 
+// ---------------------------------------------------------------------------------------------
+// Readings: each quantity has one workshop unit (the contract's table, design note "Expected
+// readings"). A reading typed in another accepted unit is converted to it before it is stored, and
+// a unit that cannot be converted is refused, so a stored value is never read in the wrong unit.
+
 export const readingQuantities = [
-  'coil-primary-resistance',
-  'ballast-resistance',
   'battery-voltage-resting',
-  'supply-voltage-cranking',
-  'supply-voltage-running',
-  'coil-feed-voltage-key-on',
-  'dwell-angle',
-  'plug-gap',
+  'coil-primary-resistance',
+  'coil-secondary-resistance',
+  'ballast-resistance',
   'ht-lead-resistance',
+  'key-on-current',
+  'coil-feed-voltage-key-on',
+  'coil-switch-voltage-key-on',
+  'coil-voltage-after-shut-off',
+  'supply-voltage-cranking',
+  'coil-feed-voltage-cranking',
+  'module-supply-voltage-cranking',
+  'supply-voltage-running',
+  'dwell-angle',
+  'tach-idle-rpm',
+  'timing-idle',
+  'timing-advanced',
+  'plug-gap',
   'other',
 ] as const;
+export type ReadingQuantity = (typeof readingQuantities)[number];
 
-export const readingInput = z.object({
+/** The one unit each quantity is stored in. 'other' keeps whatever unit was typed, unconverted (''). */
+export const readingUnits = {
+  'battery-voltage-resting': 'V',
+  'coil-primary-resistance': 'ohm',
+  'coil-secondary-resistance': 'kohm',
+  'ballast-resistance': 'ohm',
+  'ht-lead-resistance': 'kohm',
+  'key-on-current': 'A',
+  'coil-feed-voltage-key-on': 'V',
+  'coil-switch-voltage-key-on': 'V',
+  'coil-voltage-after-shut-off': 'V',
+  'supply-voltage-cranking': 'V',
+  'coil-feed-voltage-cranking': 'V',
+  'module-supply-voltage-cranking': 'V',
+  'supply-voltage-running': 'V',
+  'dwell-angle': 'deg',
+  'tach-idle-rpm': 'rpm',
+  'timing-idle': 'deg',
+  'timing-advanced': 'deg',
+  'plug-gap': 'mm',
+  other: '',
+} as const satisfies Record<ReadingQuantity, 'V' | 'A' | 'ohm' | 'kohm' | 'deg' | 'rpm' | 'mm' | ''>;
+export type ReadingUnit = (typeof readingUnits)[ReadingQuantity];
+
+/** Each quantity in plain words, for messages and labels. */
+export const readingWords: Record<ReadingQuantity, string> = {
+  'battery-voltage-resting': 'Battery voltage at rest',
+  'coil-primary-resistance': 'Coil primary resistance',
+  'coil-secondary-resistance': 'Coil secondary resistance',
+  'ballast-resistance': 'Ballast resistance',
+  'ht-lead-resistance': 'HT lead resistance',
+  'key-on-current': 'Current with the key on',
+  'coil-feed-voltage-key-on': 'Coil feed voltage with the key on',
+  'coil-switch-voltage-key-on': 'Coil switch-side voltage with the key on',
+  'coil-voltage-after-shut-off': 'Coil voltage after the module shuts off',
+  'supply-voltage-cranking': 'Battery voltage while cranking',
+  'coil-feed-voltage-cranking': 'Coil feed voltage while cranking',
+  'module-supply-voltage-cranking': 'Module supply voltage while cranking',
+  'supply-voltage-running': 'Battery voltage while running',
+  'dwell-angle': 'Dwell angle',
+  'tach-idle-rpm': 'Tachometer reading at idle',
+  'timing-idle': 'Timing at idle',
+  'timing-advanced': 'Timing with the advance in',
+  'plug-gap': 'Plug gap',
+  other: 'Other reading',
+};
+
+type UnitFamily = 'resistance' | 'voltage' | 'current' | 'length' | 'angle' | 'speed';
+type Prefix = '' | 'm' | 'k' | 'M';
+/** value in the stored unit = value typed x mul / div (integers, so 1400 mohm gives exactly 1.4 ohm). */
+type Scale = readonly [mul: number, div: number];
+
+/**
+ * What each stored unit accepts. SI prefixes (BIPM, The International System of Units, 9th
+ * edition, table 7): milli is a lower-case m (1e-3), kilo k (1e3), mega an upper-case M (1e6).
+ * Inch = 25.4 mm exactly (international yard and pound agreement, 1959); thou = 0.001 inch.
+ * Migration 002 applies the same table in SQL to the readings stored before it.
+ */
+const unitTable: Record<Exclude<ReadingUnit, ''>, { family: UnitFamily; scales: Partial<Record<string, Scale>>; accepted: string }> = {
+  ohm: { family: 'resistance', scales: { '': [1, 1], m: [1, 1000], k: [1000, 1], M: [1000000, 1] }, accepted: 'ohm, mohm (milliohm), kohm or Mohm (megohm); Ω works too' },
+  kohm: { family: 'resistance', scales: { '': [1, 1000], m: [1, 1000000], k: [1, 1], M: [1000, 1] }, accepted: 'kohm, ohm, mohm (milliohm) or Mohm (megohm); Ω works too' },
+  V: { family: 'voltage', scales: { '': [1, 1], m: [1, 1000] }, accepted: 'V or mV' },
+  A: { family: 'current', scales: { '': [1, 1], m: [1, 1000] }, accepted: 'A or mA' },
+  mm: { family: 'length', scales: { mm: [1, 1], in: [254, 10], thou: [254, 10000] }, accepted: 'mm, in (inch) or thou' },
+  deg: { family: 'angle', scales: { '': [1, 1] }, accepted: 'deg (degrees, °)' },
+  rpm: { family: 'speed', scales: { '': [1, 1] }, accepted: 'rpm (r/min)' },
+};
+
+/** Lower-cases A-Z only, as SQLite's lower() does, so the store and migration 002 agree. */
+const asciiLower = (s: string): string => s.replace(/[A-Z]/g, (c) => c.toLowerCase());
+const OHM_SIGNS = ['Ω', 'Ω']; // Greek capital omega, and the ohm sign U+2126
+const baseWords: Array<[UnitFamily, readonly string[]]> = [
+  ['resistance', ['ohm', 'ohms']],
+  ['voltage', ['v', 'volt', 'volts']],
+  ['current', ['a', 'amp', 'amps', 'ampere', 'amperes']],
+];
+function baseFamily(word: string): UnitFamily | null {
+  if (OHM_SIGNS.includes(word)) return 'resistance';
+  const w = asciiLower(word);
+  return baseWords.find(([, words]) => words.includes(w))?.[0] ?? null;
+}
+
+type ParsedUnit = { family: UnitFamily; key: string } | { ambiguous: true } | null;
+
+/** A typed unit as a family and a key into `unitTable`'s scales; null when it is no unit we know. */
+function parseUnit(unit: string): ParsedUnit {
+  const lower = asciiLower(unit);
+  if (unit === 'mm') return { family: 'length', key: 'mm' };
+  if (['in', 'inch', 'inches'].includes(lower)) return { family: 'length', key: 'in' };
+  if (lower === 'thou') return { family: 'length', key: 'thou' };
+  if (['deg', 'degree', 'degrees'].includes(lower) || unit === '°') return { family: 'angle', key: '' };
+  if (['rpm', 'r/min'].includes(lower)) return { family: 'speed', key: '' };
+  const whole = baseFamily(unit);
+  if (whole) return { family: whole, key: '' };
+  const first = unit.slice(0, 1);
+  const rest = unit.slice(1);
+  const family = baseFamily(rest);
+  if (!family) return null;
+  if (first === 'm') return { family, key: 'm' };
+  if (first === 'k' || first === 'K') return { family, key: 'k' };
+  if (first === 'M') {
+    // "Mohm" and "MΩ" are mega; "MOHM", "MV" or "MA" could be a milli typed with caps lock: refuse rather than guess.
+    if (OHM_SIGNS.includes(rest) || rest !== rest.toUpperCase()) return { family, key: 'M' };
+    return { ambiguous: true };
+  }
+  return null;
+}
+
+export type StoredUnit = { ok: true; value: number; unit: string } | { ok: false; message: string };
+
+/**
+ * A reading as typed, in the unit its quantity is stored in: converted when the unit is one of the
+ * accepted alternatives, refused (with a sentence naming the accepted units) otherwise. 'other'
+ * keeps its unit as typed and is never converted.
+ */
+export function toStoredUnit(quantity: ReadingQuantity, value: number, typedUnit: string): StoredUnit {
+  const unit = typedUnit.trim();
+  const target = readingUnits[quantity];
+  if (target === '') return { ok: true, value, unit };
+  const spec = unitTable[target];
+  const kept = `${readingWords[quantity]} is kept in ${target}; write the unit as ${spec.accepted}.`;
+  if (unit === '') return { ok: false, message: `Give the unit. ${kept}` };
+  if (unit === target) return { ok: true, value, unit: target };
+  const parsed = parseUnit(unit);
+  if (parsed && 'ambiguous' in parsed) {
+    return { ok: false, message: `"${unit}" could mean milli or mega: write a lower-case m for milli (mohm, mV, mA) and an upper-case M only for mega (Mohm). ${kept}` };
+  }
+  const scale = parsed && parsed.family === spec.family ? spec.scales[parsed.key] : undefined;
+  if (!scale) return { ok: false, message: `"${unit}" is not a unit this reading can be kept in. ${kept}` };
+  return { ok: true, value: (value * scale[0]) / scale[1], unit: target };
+}
+
+/** A real day on the (proleptic Gregorian) calendar, written YYYY-MM-DD. */
+export function isCalendarDate(text: string): boolean {
+  const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
+  if (!m) return false;
+  const [y, mo, d] = [Number(m[1]), Number(m[2]), Number(m[3])];
+  const leap = (y % 4 === 0 && y % 100 !== 0) || y % 400 === 0;
+  const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][mo - 1];
+  return days !== undefined && d >= 1 && d <= days;
+}
+
+const readingFields = z.strictObject({
   planId: id,
-  quantity: z.enum(readingQuantities),
-  value: z.number({ error: 'The reading must be a number.' }).finite(),
-  unit: z.string().trim().min(1, 'Give the unit.').max(16, 'Keep the unit under 16 characters.'),
+  quantity: z.enum(readingQuantities, { error: 'Pick what was measured from the list.' }),
+  value: z.number({ error: 'The reading must be a number.' }).finite('The reading must be a finite number.'),
+  /** Blank only for 'other'; checked against the quantity below. */
+  unit: z.string().trim().max(16, 'Keep the unit under 16 characters.'),
   takenOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Write the date as YYYY-MM-DD.'),
   note: text(500),
 });
-export const reading = readingInput.extend({ id });
+
+/**
+ * What a form sends: the unit must be the quantity's own or one the store converts (the
+ * repository converts it before storing), and the date a real one.
+ */
+export const readingInput = readingFields.superRefine((r, ctx) => {
+  if (!isCalendarDate(r.takenOn)) {
+    ctx.addIssue({ code: 'custom', path: ['takenOn'], message: `${r.takenOn} is not a day on the calendar; write a real date as YYYY-MM-DD.` });
+  }
+  const stored = toStoredUnit(r.quantity, r.value, r.unit);
+  if (!stored.ok) ctx.addIssue({ code: 'custom', path: ['unit'], message: stored.message });
+});
+
+/**
+ * A reading as stored: always in its quantity's unit (the repository converts, migration 002
+ * converted the older rows). The note may be longer than a form allows because migration 002
+ * prefixes a sentence to the note of a reading it had to move to 'other'.
+ */
+export const reading = readingFields.extend({ id, note: text(1000) }).superRefine((r, ctx) => {
+  const target = readingUnits[r.quantity];
+  if (target !== '' && r.unit !== target) {
+    ctx.addIssue({ code: 'custom', path: ['unit'], message: `${readingWords[r.quantity]} is kept in ${target}, but this row says ${r.unit || 'no unit'}.` });
+  }
+});
+
+/** A step key of a wiring sheet ("measure.coil-primary"): short text without control characters. */
+export const stepKey = z
+  .string({ error: 'Name the step by its key.' })
+  .min(1, 'Name the step by its key.')
+  .max(80, 'A step key is at most 80 characters.')
+  .refine((s) => !/[\u0000-\u001f\u007f-\u009f]/.test(s), 'A step key cannot hold control characters.');
+
+/** A ticked step of a plan's wiring sheet; `tickedOn` is when it was ticked (ISO 8601). */
+export const sheetTick = z.strictObject({ planId: id, stepKey, tickedOn: z.string() });
 
 export type AdvancePoint = z.infer<typeof advancePoint>;
 export type ConditionOverrides = z.infer<typeof conditionOverrides>;
@@ -309,6 +500,8 @@ export type Plan = z.infer<typeof plan>;
 export type PlanStatus = z.infer<typeof planStatus>;
 export type ReadingInput = z.infer<typeof readingInput>;
 export type Reading = z.infer<typeof reading>;
+export type StepKey = z.infer<typeof stepKey>;
+export type SheetTick = z.infer<typeof sheetTick>;
 
 /** Turn zod's issues into `{ "existing.plugGapMm": "message" }` for showing beside form fields. */
 export function fieldMessages(error: z.ZodError): Record<string, string> {

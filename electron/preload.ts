@@ -33,6 +33,11 @@ const bridge = {
   'readings.list': call('readings.list'),
   'readings.add': call('readings.add'),
   'readings.delete': call('readings.delete'),
+  'readings.update': call('readings.update'),
+  'plans.setStatus': call('plans.setStatus'),
+  'sheet.get': call('sheet.get'),
+  'sheet.tick': call('sheet.tick'),
+  'app.print': call('app.print'),
   'check.plans': call('check.plans'),
   'check.search': call('check.search'),
 } satisfies BridgeApi;

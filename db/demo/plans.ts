@@ -35,7 +35,7 @@ export const demoPlans: readonly DemoPlan[] = [
       { quantity: 'coil-primary-resistance', value: 3.1, unit: 'ohm', takenOn: '2024-03-09', note: 'Cold, on the bench, leads nulled.' },
       { quantity: 'battery-voltage-resting', value: 12.6, unit: 'V', takenOn: '2024-03-09', note: 'After standing overnight.' },
       { quantity: 'supply-voltage-cranking', value: 10.1, unit: 'V', takenOn: '2024-03-10', note: 'At the module supply terminal.' },
-      { quantity: 'coil-feed-voltage-key-on', value: 12.3, unit: 'V', takenOn: '2024-03-10', note: 'Engine stopped; module shut the coil off after a second.' },
+      { quantity: 'coil-voltage-after-shut-off', value: 12.3, unit: 'V', takenOn: '2024-03-10', note: 'Engine stopped; coil 1 to earth after the module shut the coil off.' },
     ],
   },
   {

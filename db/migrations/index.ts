@@ -3,8 +3,9 @@
  * here; never edit one that has shipped (DEVELOPERS.md, "How to add a migration").
  */
 import { migration001 } from './001-initial.js';
+import { migration002 } from './002-sheet-ticks-and-reading-units.js';
 import type { Migration } from './types.js';
 
-export const migrations: readonly Migration[] = [migration001];
+export const migrations: readonly Migration[] = [migration001, migration002];
 
 export type { Migration } from './types.js';

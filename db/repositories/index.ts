@@ -9,12 +9,15 @@ import { createPartsRepository, type PartsRepository } from './parts.js';
 import { createPlansRepository, type PlansRepository } from './plans.js';
 import { createReadingsRepository, type ReadingsRepository } from './readings.js';
 import type { CorruptRow, RepoContext } from './shared.js';
+import { createTicksRepository, type TicksRepository } from './ticks.js';
 
 export type Repositories = {
   engines: EnginesRepository;
   parts: PartsRepository;
   plans: PlansRepository;
   readings: ReadingsRepository;
+  /** The ticked steps of each plan's wiring sheet. */
+  ticks: TicksRepository;
   meta: MetaRepository;
   /** Run `fn` in one transaction (nested calls become savepoints); any throw rolls all of it back. */
   transaction<T>(fn: () => T): T;
@@ -35,6 +38,7 @@ export function createRepositories(db: Database.Database, options: RepositoryOpt
     parts: createPartsRepository(ctx),
     plans: createPlansRepository(ctx),
     readings: createReadingsRepository(ctx),
+    ticks: createTicksRepository(ctx),
     meta: createMetaRepository(ctx),
     transaction: (fn) => db.transaction(fn)(),
   };
@@ -45,4 +49,5 @@ export type { EngineSummary, EnginesRepository } from './engines.js';
 export type { PartsRepository } from './parts.js';
 export type { PlansRepository } from './plans.js';
 export type { ReadingsRepository } from './readings.js';
+export type { TicksRepository } from './ticks.js';
 export type { MetaRepository } from './meta.js';

@@ -2,7 +2,8 @@
  * Conversion plans: which module, coil, ballast, tach, leads and plug one engine would get.
  * Each part reference must name a stored part of the right kind (a coil in `coilId`, and so on).
  */
-import { plan as planSchema, planInput, type Plan, type PlanInput } from '../schema.js';
+import { z } from 'zod';
+import { plan as planSchema, planInput, planStatus, type Plan, type PlanInput, type PlanStatus } from '../schema.js';
 import { StoreError } from '../errors.js';
 import { INVALID_SENTENCE, nowIso, parseInput, parseStored, partRefChecker, readAll, type RepoContext } from './shared.js';
 
@@ -12,6 +13,8 @@ export type PlansRepository = {
   get(id: number): Plan;
   create(input: PlanInput): Plan;
   update(id: number, input: PlanInput): Plan;
+  /** Sets the status alone (by hand in any direction, or moved forward by the work on the sheet). */
+  setStatus(id: number, status: PlanStatus): Plan;
   /** Deletes the plan and its readings together. */
   delete(id: number): { deleted: true; readingsDeleted: number };
   count(): number;
@@ -34,6 +37,8 @@ type PlanRow = {
   plug_gap_mm: number;
   updated_at: string;
 };
+
+const statusOnly = z.strictObject({ status: z.enum(planStatus.options, { error: 'The status is draft, checked, wired or done.' }) });
 
 const COLUMNS = `engine_id, name, notes, status, module_id, coil_id, ballast_id, tach_id, leads_id, plug_id,
   cranking_bypass, module_feed, plug_gap_mm`;
@@ -71,6 +76,7 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
     engineExists: db.prepare<[number], { id: number }>('SELECT id FROM engines WHERE id = ?'),
     insert: db.prepare(`INSERT INTO plans (${COLUMNS}, created_at, updated_at) VALUES (${PARAMS}, @now, @now)`),
     update: db.prepare(`UPDATE plans SET (${COLUMNS}, updated_at) = (${PARAMS}, @now) WHERE id = @id`),
+    setStatus: db.prepare('UPDATE plans SET status = @status, updated_at = @now WHERE id = @id'),
     readingCount: db.prepare<[number], { n: number }>('SELECT COUNT(*) AS n FROM readings WHERE plan_id = ?'),
     remove: db.prepare('DELETE FROM plans WHERE id = ?'),
     count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM plans'),
@@ -117,6 +123,13 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
       db.transaction(() => {
         read(id);
         s.update.run({ ...validate(input), id });
+        return read(id);
+      })(),
+    setStatus: (id, status) =>
+      db.transaction(() => {
+        const { status: s2 } = parseInput(statusOnly, { status });
+        read(id);
+        s.setStatus.run({ status: s2, now: nowIso(), id });
         return read(id);
       })(),
     delete: (id) => deleteTx(id),

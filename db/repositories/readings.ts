@@ -1,12 +1,19 @@
-/** Meter readings taken while carrying out a plan; they belong to the plan and go with it. */
-import { reading as readingSchema, readingInput, type Reading, type ReadingInput } from '../schema.js';
+/**
+ * Meter readings taken while carrying out a plan; they belong to the plan and go with it. A
+ * reading typed in an accepted alternative unit (mohm, mV, inch ...) is stored converted to its
+ * quantity's one unit (`readingUnits` in schema.ts), so every stored value means what it says.
+ */
+import { reading as readingSchema, readingInput, toStoredUnit, type Reading, type ReadingInput } from '../schema.js';
 import { StoreError } from '../errors.js';
 import { INVALID_SENTENCE, nowIso, parseInput, parseStored, readAll, type RepoContext } from './shared.js';
 
 export type ReadingsRepository = {
   /** NOT_FOUND if the plan does not exist. Oldest first. */
   list(planId: number): Reading[];
+  get(id: number): Reading;
   add(input: ReadingInput): Reading;
+  /** Replaces a reading's quantity, value, unit, date and note; it stays with its plan. */
+  update(id: number, input: ReadingInput): Reading;
   delete(id: number): { deleted: true };
   count(): number;
 };
@@ -25,6 +32,15 @@ function fromRow(row: ReadingRow): Reading {
   });
 }
 
+/** Parse what a caller wants to store and convert it to the quantity's unit. */
+function validate(input: unknown): ReadingInput {
+  const r = parseInput(readingInput, input);
+  const stored = toStoredUnit(r.quantity, r.value, r.unit);
+  // readingInput has already refused a unit that cannot be converted; this keeps the store honest on its own.
+  if (!stored.ok) throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, { unit: stored.message });
+  return { ...r, value: stored.value, unit: stored.unit };
+}
+
 export function createReadingsRepository(ctx: RepoContext): ReadingsRepository {
   const { db } = ctx;
   const select = 'SELECT id, plan_id, quantity, value, unit, taken_on, note FROM readings';
@@ -35,6 +51,7 @@ export function createReadingsRepository(ctx: RepoContext): ReadingsRepository {
     insert: db.prepare(
       'INSERT INTO readings (plan_id, quantity, value, unit, taken_on, note, created_at) VALUES (@planId, @quantity, @value, @unit, @takenOn, @note, @now)',
     ),
+    update: db.prepare('UPDATE readings SET quantity = @quantity, value = @value, unit = @unit, taken_on = @takenOn, note = @note WHERE id = @id'),
     remove: db.prepare('DELETE FROM readings WHERE id = ?'),
     count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM readings'),
   };
@@ -50,11 +67,25 @@ export function createReadingsRepository(ctx: RepoContext): ReadingsRepository {
       if (!s.planExists.get(planId)) throw new StoreError('NOT_FOUND', `There is no plan with id ${planId}; it may have been deleted.`);
       return readAll(ctx, 'readings', s.byPlan.all(planId), fromRow);
     },
+    get: (id) => read(id),
     add: (input) =>
       db.transaction(() => {
-        const r = parseInput(readingInput, input);
+        const r = validate(input);
         if (!s.planExists.get(r.planId)) throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, { planId: `There is no plan with id ${r.planId}.` });
         return read(Number(s.insert.run({ ...r, now: nowIso() }).lastInsertRowid));
+      })(),
+    update: (id, input) =>
+      db.transaction(() => {
+        const row = s.get.get(id);
+        if (!row) throw new StoreError('NOT_FOUND', `There is no reading with id ${id}; it may have been deleted.`);
+        const r = validate(input);
+        if (r.planId !== row.plan_id) {
+          throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, {
+            planId: `This reading belongs to plan ${row.plan_id}; a reading stays with its plan (delete it and add it to the other plan instead).`,
+          });
+        }
+        s.update.run({ ...r, id });
+        return read(id);
       })(),
     delete: (id) =>
       db.transaction(() => {

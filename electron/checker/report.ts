@@ -93,6 +93,8 @@ function inputsOf(s: Session, a: Analysis): Figure[] {
         : { name: 'ballast thermal resistance', value: s.conditions.ballastThermalResistanceKPerW.value, unit: 'K/W', provenance: s.conditions.ballastThermalResistanceKPerW.provenance },
     );
   }
+  const leads = a.setup.leads;
+  if (leads?.resistanceProvenance) out.push({ name: 'HT lead resistance', value: leads.resistancePerLeadOhm, unit: 'ohm', provenance: leads.resistanceProvenance });
   return out;
 }
 

@@ -167,6 +167,8 @@ export interface LeadsSpec {
   name: string;
   core: 'copper' | 'carbon' | 'spiral';
   resistancePerLeadOhm: number;
+  /** Where the resistance came from (a measured reading wins over the catalogue); absent: not reported as an input. */
+  resistanceProvenance?: Provenance;
 }
 
 export interface PlugSpec {

@@ -8,17 +8,20 @@ import { storeFileIn } from '../../db/location.js';
 import { closeStore, openStore } from '../../db/open.js';
 import { createRepositories } from '../../db/repositories/index.js';
 import { createDispatcher, type Dispatch } from './dispatch.js';
-import { handlersFor } from './handlers.js';
+import { handlersFor, type HostInfo } from './handlers.js';
 
 export type Backend = { dispatch: Dispatch; close(): void; storeFile: string };
 
-export function openBackend(opts: { dataDir: string; host: 'desktop' | 'browser'; version: string }): Backend {
+/** `print` is the desktop shell's printing hook; without it 'app.print' answers UNSUPPORTED. */
+export function openBackend(opts: { dataDir: string; host: 'desktop' | 'browser'; version: string; print?: HostInfo['print'] }): Backend {
   const storeFile = storeFileIn(opts.dataDir);
   const db = openStore(storeFile);
   try {
     const repos = createRepositories(db);
     loadDemoIfFirstRun(repos);
-    const handlers = handlersFor(repos, { version: opts.version, dataDir: opts.dataDir, host: opts.host });
+    const info: HostInfo = { version: opts.version, dataDir: opts.dataDir, host: opts.host };
+    if (opts.print) info.print = opts.print;
+    const handlers = handlersFor(repos, info);
     // A fault of ours goes to stderr; stdout is kept for the browser host's single ready line.
     const dispatch = createDispatcher(handlers, (err) => console.error('[backend] internal error:', err));
     return { dispatch, storeFile, close: () => closeStore(db) };

@@ -5,10 +5,12 @@
  * the desktop app runs. Nothing outside this file decides what the renderer may ask for.
  */
 import { z } from 'zod';
-import { engine, engineInput, part, partInput, partKind, plan, planInput, reading, readingInput } from '../../db/schema.js';
+import { engine, engineInput, part, partInput, partKind, plan, planInput, planStatus, reading, readingInput, stepKey } from '../../db/schema.js';
 import { checkPlansRequest, checkSearchRequest, comparisonAnswer, searchAnswer } from './check-shapes.js';
+import { printAnswer, printRequest, sheetAnswerFields } from './sheet-shapes.js';
 
 export * from './check-shapes.js';
+export * from './sheet-shapes.js';
 
 const id = z.number().int().positive();
 const byId = z.object({ id });
@@ -23,6 +25,10 @@ export const engineSummary = z.object({
   earthPolarity: z.string(),
   planCount: z.number().int().min(0),
 });
+
+/** What 'sheet.get' and 'sheet.tick' answer: the sheet, its ticks, the plan's readings judged, the progress and the status. */
+export const sheetAnswer = sheetAnswerFields.extend({ readings: z.array(reading) });
+export type SheetAnswer = z.infer<typeof sheetAnswer>;
 
 export const channels = {
   'app.info': {
@@ -55,6 +61,16 @@ export const channels = {
   'readings.list': { request: z.object({ planId: id }), response: z.array(reading) },
   'readings.add': { request: z.object({ reading: readingInput }), response: reading },
   'readings.delete': { request: byId, response: z.object({ deleted: z.literal(true) }) },
+  /** A reading corrected: converted to its quantity's unit like 'readings.add'; it stays with its plan. */
+  'readings.update': { request: z.strictObject({ id, reading: readingInput }), response: reading },
+  /** The status set by hand, in any direction (the work on the sheet only ever moves it forward). */
+  'plans.setStatus': { request: z.strictObject({ id, status: planStatus }), response: plan },
+  /** A plan's wiring sheet with its ticks, readings and progress. */
+  'sheet.get': { request: z.strictObject({ planId: id }), response: sheetAnswer },
+  /** Ticks or unticks one step of the plan's sheet; the status moves forward if the work reached 'wired' or 'done'. */
+  'sheet.tick': { request: z.strictObject({ planId: id, stepKey, ticked: z.boolean() }), response: sheetAnswer },
+  /** Prints the page shown (desktop: saved as a PDF); the browser host answers UNSUPPORTED and the page uses window.print(). */
+  'app.print': { request: printRequest, response: printAnswer },
   /** The engine's existing setup beside up to three of its plans, judged rule by rule. */
   'check.plans': { request: checkPlansRequest, response: comparisonAnswer },
   /** The best combinations of module, coil and ballast from the whole parts bin for one engine. */

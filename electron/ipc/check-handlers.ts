@@ -17,7 +17,7 @@ import { AppFailure } from './failure.js';
 const cautions = (): ComparisonAnswer['cautions'] => ignitionCautions.map((c) => ({ id: c.id, text: c.text }));
 
 /** Runs adapter and checker code, turning their errors into the bridge's codes and sentences. */
-function adapting<T>(body: () => T): T {
+export function adapting<T>(body: () => T): T {
   try {
     return body();
   } catch (err) {

@@ -8,11 +8,22 @@ import { loadDemo } from '../../db/demo/index.js';
 import { StoreError } from '../../db/errors.js';
 import { SCHEMA_VERSION } from '../../db/open.js';
 import { createRepositories, type Repositories } from '../../db/repositories/index.js';
+import type { PageSize, PrintAnswer } from './channels.js';
 import { checkPlans, searchShelf } from './check-handlers.js';
 import type { Handlers } from './dispatch.js';
 import { AppFailure } from './failure.js';
+import { advanceAfterReading, getSheet, markChecked, tickStep } from './sheet-handlers.js';
 
-export type HostInfo = { version: string; dataDir: string; host: 'desktop' | 'browser' };
+export type HostInfo = {
+  version: string;
+  dataDir: string;
+  host: 'desktop' | 'browser';
+  /** The desktop shell's printing (the page shown, as a PDF); without it 'app.print' answers UNSUPPORTED. */
+  print?: (pageSize: PageSize) => Promise<PrintAnswer>;
+};
+
+export const PRINT_UNSUPPORTED =
+  "Printing from here uses the browser's own print: pick the paper size (A4 or Letter) in the browser's print dialogue.";
 
 export function createHandlers(db: Database.Database, info: HostInfo): Handlers {
   return handlersFor(createRepositories(db), info);
@@ -41,13 +52,42 @@ export function handlersFor(repos: Repositories, info: HostInfo): Handlers {
     'plans.create': guard('plan', (r) => repos.plans.create(r.plan)),
     'plans.update': guard('plan', (r) => repos.plans.update(r.id, r.plan)),
     'plans.delete': guard(undefined, (r) => repos.plans.delete(r.id)),
+    'plans.setStatus': guard(undefined, (r) => repos.plans.setStatus(r.id, r.status)),
 
     'readings.list': guard(undefined, (r) => repos.readings.list(r.planId)),
-    'readings.add': guard('reading', (r) => repos.readings.add(r.reading)),
-    'readings.delete': guard(undefined, (r) => repos.readings.delete(r.id)),
+    // After a reading is saved or removed, the plan's status moves forward if the work reached 'done'.
+    'readings.add': guard('reading', (r) => {
+      const saved = repos.readings.add(r.reading);
+      advanceAfterReading(repos, saved.planId);
+      return saved;
+    }),
+    'readings.update': guard('reading', (r) => {
+      const saved = repos.readings.update(r.id, r.reading);
+      advanceAfterReading(repos, saved.planId);
+      return saved;
+    }),
+    'readings.delete': guard(undefined, (r) => {
+      const { planId } = repos.readings.get(r.id);
+      const done = repos.readings.delete(r.id);
+      advanceAfterReading(repos, planId);
+      return done;
+    }),
 
-    'check.plans': guard(undefined, (r) => checkPlans(repos, r)),
+    // Weighing a plan moves it from draft to checked.
+    'check.plans': guard(undefined, (r) => {
+      const answer = checkPlans(repos, r);
+      markChecked(repos, r.planIds);
+      return answer;
+    }),
     'check.search': guard(undefined, (r) => searchShelf(repos, r)),
+
+    'sheet.get': guard(undefined, (r) => getSheet(repos, r.planId)),
+    'sheet.tick': guard(undefined, (r) => tickStep(repos, r)),
+
+    'app.print': async (r) => {
+      if (!info.print) throw new AppFailure('UNSUPPORTED', PRINT_UNSUPPORTED);
+      return info.print(r.pageSize);
+    },
   };
 }
 

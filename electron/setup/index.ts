@@ -5,4 +5,5 @@
 export { engineSpec, conditionInputs } from './engine.js';
 export { coilSpec, ballastSpec, moduleSpec, tachSpec, leadsSpec, plugSpec, latestReading, defaultHarnessWire, partOf } from './parts.js';
 export { existingSetupSpec, planSetupSpec, comparisonInput, searchInput, defaultMagnetoArmature } from './setups.js';
+export { sheetInput } from './sheet.js';
 export { SetupAdapterError, type SetupErrorCode } from './errors.js';

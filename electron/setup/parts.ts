@@ -80,7 +80,16 @@ export function moduleSpec(m: IgnitionModule): ModuleSpec {
 }
 
 export const tachSpec = (t: Tach): TachSpec => ({ name: t.name, senses: t.senses });
-export const leadsSpec = (l: Leads): LeadsSpec => ({ name: l.name, core: l.core, resistancePerLeadOhm: l.resistancePerLeadOhm });
+/**
+ * HT leads. A measured lead resistance (stored in kohm, end to end of one lead) wins over the
+ * catalogue figure per lead, converted to the checker's ohm.
+ */
+export function leadsSpec(l: Leads, readings?: readonly Reading[]): LeadsSpec {
+  const measured = latestReading(readings, 'ht-lead-resistance');
+  return measured && measured.value >= 0
+    ? { name: l.name, core: l.core, resistancePerLeadOhm: measured.value * 1000, resistanceProvenance: 'measured' }
+    : { name: l.name, core: l.core, resistancePerLeadOhm: l.resistancePerLeadOhm, resistanceProvenance: 'catalogue' };
+}
 export const plugSpec = (p: Plug): PlugSpec => ({ name: p.name, resistor: p.resistor, resistorOhm: p.resistorOhm, gapMinM: p.gapMinMm / 1000, gapMaxM: p.gapMaxMm / 1000 });
 
 /** Look a part up by id and kind, with a plain error when it is missing or of another kind. */

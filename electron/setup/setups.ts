@@ -60,8 +60,8 @@ export function existingSetupSpec(e: Engine, parts: readonly Part[]): SetupSpec 
 }
 
 /**
- * A plan's setup. Readings taken on the plan (a coil resistance, a ballast resistance, a plug gap)
- * override the catalogue values and are marked measured.
+ * A plan's setup. Readings taken on the plan (a coil resistance, a ballast resistance, an HT lead
+ * resistance, a plug gap) override the catalogue values and are marked measured.
  */
 export function planSetupSpec(e: Engine, plan: Plan, parts: readonly Part[], readings?: readonly Reading[]): SetupSpec {
   if (plan.engineId !== e.id) throw new SetupAdapterError('INVALID_INPUT', `The plan "${plan.name}" belongs to another engine.`);
@@ -81,7 +81,13 @@ export function planSetupSpec(e: Engine, plan: Plan, parts: readonly Part[], rea
     // A module switches the coil itself; the points condenser comes off (the checklist says so).
     condenserF: mod ? null : (existing.condenserF ?? 0.22e-6),
     tach: plan.tachId !== null ? tachSpec(partOf(parts, plan.tachId, 'tach', 'tachometer')) : existing.tach,
-    leads: plan.leadsId !== null ? leadsSpec(partOf(parts, plan.leadsId, 'leads', 'ignition leads')) : existing.leads,
+    // The leads on the car (the plan's, or today's kept): a measured lead resistance wins either way.
+    leads:
+      plan.leadsId !== null
+        ? leadsSpec(partOf(parts, plan.leadsId, 'leads', 'ignition leads'), readings)
+        : e.existing.leadsPartId !== null
+          ? leadsSpec(partOf(parts, e.existing.leadsPartId, 'leads', 'ignition leads'), readings)
+          : null,
     plug: plan.plugId !== null ? plugSpec(partOf(parts, plan.plugId, 'plug', 'spark plug')) : existing.plug,
     plugGapM: gapReading && gapReading.value > 0 && gapReading.value <= 3 ? gapReading.value / 1000 : plan.plugGapMm / 1000,
     magneto: null,

@@ -73,7 +73,93 @@ const perVersion: Record<number, (db: Database.Database) => void> = {
     }
     expect(db.prepare('SELECT COUNT(*) AS n FROM parts').get()).toEqual({ n: 1 });
   },
+  2: (db) => {
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'sheet_ticks']);
+    seedPlan(db);
+    db.prepare("INSERT INTO sheet_ticks (plan_id, step_key, ticked_on) VALUES (1, 'fit.coil', ?), (1, 'fit.module', ?)").run(NOW, NOW);
+    // One tick per step of a plan (the primary key), only for a plan that exists, and STRICT types.
+    expect(() => db.prepare("INSERT INTO sheet_ticks (plan_id, step_key, ticked_on) VALUES (1, 'fit.coil', ?)").run(NOW)).toThrow(/UNIQUE/);
+    expect(() => db.prepare("INSERT INTO sheet_ticks (plan_id, step_key, ticked_on) VALUES (99, 'fit.coil', ?)").run(NOW)).toThrow(/FOREIGN KEY/);
+    expect(() => db.prepare("INSERT INTO sheet_ticks (plan_id, step_key, ticked_on) VALUES ('one', 'x', ?)").run(NOW)).toThrow(/cannot store TEXT/);
+    // Deleting the plan takes its ticks (ON DELETE CASCADE).
+    db.prepare('DELETE FROM plans WHERE id = 1').run();
+    expect(db.prepare('SELECT COUNT(*) AS n FROM sheet_ticks').get()).toEqual({ n: 0 });
+
+    // Readings stored by version 1 in other units come out of the upgrade in their quantity's unit.
+    const old = rawMemory();
+    migrate(old, migrations, 1);
+    seedPlan(old);
+    const add = old.prepare("INSERT INTO readings (plan_id, quantity, value, unit, taken_on, note, created_at) VALUES (1, ?, ?, ?, '2024-03-09', ?, ?)");
+    const seeded: Array<[string, number, string, string]> = [
+      ['coil-primary-resistance', 1400, 'mohm', 'bench'], // milli = 1e-3 (BIPM SI Brochure, 9th ed., table 7): 1400 x 1e-3 = 1.4 ohm
+      ['coil-primary-resistance', 3.1, 'Ohms', ''],
+      ['ballast-resistance', 1.5, 'Ω', ''],
+      ['ballast-resistance', 0.0015, 'kohm', ''], // kilo = 1e3: 0.0015 x 1e3 = 1.5 ohm
+      ['ht-lead-resistance', 5600, 'ohm', ''], // 5600 ohm / 1e3 = 5.6 kohm
+      ['ht-lead-resistance', 0.0056, 'Mohm', ''], // mega = 1e6: 0.0056 x 1e6 / 1e3 = 5.6 kohm
+      ['battery-voltage-resting', 12600, 'mV', ''], // 12600 x 1e-3 = 12.6 V
+      ['supply-voltage-cranking', 9.8, 'v', ''],
+      ['dwell-angle', 54, 'degrees', ''],
+      ['plug-gap', 0.025, 'in', ''], // inch = 25.4 mm exactly (1959 agreement): 0.025 x 25.4 = 0.635 mm
+      ['plug-gap', 35, 'thou', ''], // thou = 0.001 inch = 0.0254 mm: 35 x 0.0254 = 0.889 mm
+      ['coil-primary-resistance', 1400, 'MOHM', 'caps lock?'], // milli or mega: not guessed at
+      ['supply-voltage-running', 14, 'furlong', ''],
+      ['other', 1, 'V', 'kept'],
+      ['coil-primary-resistance', 3.0, 'ohm', 'already right'],
+    ];
+    for (const [q, v, u, note] of seeded) add.run(q, v, u, note, NOW);
+    migrate(old, migrations, 2);
+    const rows = old.prepare<[], { quantity: string; value: number; unit: string; note: string }>('SELECT quantity, value, unit, note FROM readings ORDER BY id').all();
+    const expected: Array<[string, number, string]> = [
+      ['coil-primary-resistance', 1400 * 1e-3, 'ohm'],
+      ['coil-primary-resistance', 3.1, 'ohm'],
+      ['ballast-resistance', 1.5, 'ohm'],
+      ['ballast-resistance', 0.0015 * 1e3, 'ohm'],
+      ['ht-lead-resistance', 5600 / 1e3, 'kohm'],
+      ['ht-lead-resistance', (0.0056 * 1e6) / 1e3, 'kohm'],
+      ['battery-voltage-resting', 12600 * 1e-3, 'V'],
+      ['supply-voltage-cranking', 9.8, 'V'],
+      ['dwell-angle', 54, 'deg'],
+      ['plug-gap', 0.025 * 25.4, 'mm'],
+      ['plug-gap', 35 * 0.0254, 'mm'],
+      ['other', 1400, 'MOHM'],
+      ['other', 14, 'furlong'],
+      ['other', 1, 'V'],
+      ['coil-primary-resistance', 3.0, 'ohm'],
+    ];
+    expect(rows).toHaveLength(expected.length);
+    rows.forEach((row, i) => {
+      const [q, v, u] = expected[i]!;
+      expect(row.quantity, `row ${i + 1}`).toBe(q);
+      expect(row.value, `row ${i + 1}`).toBeCloseTo(v, 9);
+      expect(row.unit, `row ${i + 1}`).toBe(u);
+    });
+    // A moved reading keeps its value and unit, and its note says what it was recorded as.
+    expect(rows[11]!.note).toMatch(/^\(Recorded as coil-primary-resistance in "MOHM", which could not be converted to ohm\.\) caps lock\?$/);
+    expect(rows[12]!.note).toMatch(/supply-voltage-running in "furlong".*to V\.\) $/);
+    expect(rows[13]!.note).toBe('kept');
+    // Every row reads back through the repositories (none skipped as unreadable).
+    const corrupt: unknown[] = [];
+    expect(createRepositories(old, { onCorruptRow: (r) => corrupt.push(r) }).readings.list(1)).toHaveLength(expected.length);
+    expect(corrupt).toEqual([]);
+    old.close();
+  },
 };
+
+/** An engine with one plan (id 1), in raw SQL, as versions 1 and 2 store them. */
+function seedPlan(db: Database.Database): void {
+  db.prepare("INSERT INTO parts (kind, name, data, created_at, updated_at) VALUES ('coil', 'c', '{}', ?, ?)").run(NOW, NOW);
+  db.prepare(
+    `INSERT INTO engines (name, cylinders, cycle, firing_order, bore_mm, stroke_mm, con_rod_mm, compression_ratio,
+       idle_rpm, cranking_rpm, redline_rpm, system_voltage_v, earth_polarity, charging, points_dwell_deg, points_gap_mm,
+       static_timing_deg_btdc, existing, created_at, updated_at)
+     VALUES ('e', 4, 'four-stroke', '1-3-4-2', 80, 80, 130, 8.5, 800, 150, 6000, 12, 'negative', 'dynamo', 60, 0.4, 8, '{}', ?, ?)`,
+  ).run(NOW, NOW);
+  db.prepare(
+    `INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at)
+     VALUES (1, 'p', 'draft', 1, 0, 'switched-15', 0.8, ?, ?)`,
+  ).run(NOW, NOW);
+}
 
 describe('the migration list', () => {
   it('has a seed-and-assert spec in this file for every migration', () => {
@@ -174,7 +260,7 @@ describe('opening a real file', () => {
     const file = join(temp('chain'), 'workshop.sqlite3');
     const db = openStore(file);
     expect(readUserVersion(db)).toBe(SCHEMA_VERSION);
-    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings']);
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'sheet_ticks']);
     closeStore(db);
     expect(existsSync(file)).toBe(true);
   });

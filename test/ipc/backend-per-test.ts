@@ -10,7 +10,7 @@ import { openBackend, type Backend } from '../../electron/ipc/backend.js';
 import type { ChannelName, Result } from '../../electron/ipc/channels.js';
 import { tempDir } from '../db/samples.js';
 
-const tables = ['engines', 'advance_points', 'parts', 'plans', 'readings', 'meta'];
+const tables = ['engines', 'advance_points', 'parts', 'plans', 'readings', 'sheet_ticks', 'meta'];
 
 export type StoreUnderTest = {
   readonly dir: string;

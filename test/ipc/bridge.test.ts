@@ -40,6 +40,11 @@ const malformed: Record<ChannelName, { payload: unknown; field: string }> = {
   'readings.list': { payload: { planId: '1' }, field: 'planId' },
   'readings.add': { payload: { reading: { ...readingIn(1), value: 'NaN' } }, field: 'reading.value' },
   'readings.delete': { payload: { id: -3 }, field: 'id' },
+  'readings.update': { payload: { id: 1, reading: { ...readingIn(1), unit: 'furlong' } }, field: 'reading.unit' },
+  'plans.setStatus': { payload: { id: 1, status: 'finished' }, field: 'status' },
+  'sheet.get': { payload: { planId: 1, colour: 'red' }, field: '_' },
+  'sheet.tick': { payload: { planId: 1, stepKey: 'fit.coil\u0007', ticked: true }, field: 'stepKey' },
+  'app.print': { payload: { pageSize: 'A3' }, field: 'pageSize' },
   'check.plans': { payload: { engineId: 1, planIds: [1, 2, 3, 4] }, field: 'planIds' },
   'check.search': { payload: { engineId: 1, top: 11 }, field: 'top' },
 };
