@@ -4,9 +4,10 @@
 //                                                     rebuilt for Electron's ABI at packaging)
 //   electron/preload.ts -> dist-electron/preload.cjs CommonJS with everything inlined: a sandboxed
 //                                                     preload may only require('electron')
-//   electron/cli.ts     -> dist-electron/cli.mjs     ESM for plain Node, if the file exists
+//   electron/cli.ts     -> dist-electron/cli.mjs     ESM for plain Node, if the file exists, with
+//                                                     renderer/styles/sheet.css copied beside it
 import { build } from 'esbuild';
-import { existsSync, mkdirSync, rmSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -60,6 +61,8 @@ if (existsSync(cli)) {
       banner: { js: requireShim },
     }),
   );
+  // The checklist command inlines the sheet's stylesheet into its HTML; it reads it beside the bundle.
+  copyFileSync(at('renderer/styles/sheet.css'), path.join(outDir, 'sheet.css'));
 } else {
   console.log('electron/cli.ts is not there yet: skipped dist-electron/cli.mjs.');
 }

@@ -3,6 +3,7 @@
  * Refusals go to stderr as `field: why` lines with exit code 2, never as a stack trace.
  */
 import { parseArgs } from './cli/args.js';
+import { checklistCommand } from './cli/checklist.js';
 import { checkCommand, netlistCommand, searchCommand } from './cli/commands.js';
 import { CliError } from './cli/errors.js';
 import { usage } from './cli/help.js';
@@ -11,14 +12,15 @@ const commands: Record<string, (args: ReturnType<typeof parseArgs>) => string> =
   check: checkCommand,
   search: searchCommand,
   netlist: netlistCommand,
+  checklist: checklistCommand,
 };
 
 export function runCli(argv: readonly string[]): { code: number; stdout: string; stderr: string } {
   const args = parseArgs(argv);
   if (args.flags.get('help') === true || args.command === 'help') return { code: 0, stdout: usage, stderr: '' };
-  if (args.command === null) return { code: 2, stdout: '', stderr: `Give a command: check, search or netlist.\n\n${usage}` };
+  if (args.command === null) return { code: 2, stdout: '', stderr: `Give a command: check, search, netlist or checklist.\n\n${usage}` };
   const run = commands[args.command];
-  if (!run) return { code: 2, stdout: '', stderr: `Unknown command "${args.command}": use check, search or netlist (or --help).\n` };
+  if (!run) return { code: 2, stdout: '', stderr: `Unknown command "${args.command}": use check, search, netlist or checklist (or --help).\n` };
   try {
     return { code: 0, stdout: run(args), stderr: '' };
   } catch (e) {

@@ -56,16 +56,21 @@ function openIfPlainWebLink(url: unknown): void {
   if (verdict.open) void shell.openExternal(verdict.url);
 }
 
-async function printCurrentViewToPdf(win: BrowserWindow): Promise<void> {
-  // The renderer's print stylesheet decides what appears; we print what is on screen now.
-  const pdf = await win.webContents.printToPDF({ printBackground: true, pageSize: 'A4' });
+/**
+ * Prints what the window shows now to a PDF the user saves. The renderer's print stylesheet decides
+ * what appears (the wiring sheet prints black on white, with its own page numbers), so backgrounds
+ * are left off. Used by the File menu and by the screens' Print button (the 'app.print' channel).
+ */
+async function printCurrentViewToPdf(win: BrowserWindow, pageSize: 'A4' | 'Letter'): Promise<{ saved: boolean; path: string | null }> {
+  const pdf = await win.webContents.printToPDF({ printBackground: false, pageSize, preferCSSPageSize: false });
   const choice = await dialog.showSaveDialog(win, {
     title: 'Save this view as PDF',
-    defaultPath: path.join(app.getPath('documents'), 'wiring-checklist.pdf'),
+    defaultPath: path.join(app.getPath('documents'), 'wiring-sheet.pdf'),
     filters: [{ name: 'PDF document', extensions: ['pdf'] }],
   });
-  if (choice.canceled || !choice.filePath) return;
+  if (choice.canceled || !choice.filePath) return { saved: false, path: null };
   await writeFile(choice.filePath, pdf);
+  return { saved: true, path: choice.filePath };
 }
 
 async function loadDemoWorkshop(win: BrowserWindow): Promise<void> {
@@ -88,7 +93,8 @@ async function loadDemoWorkshop(win: BrowserWindow): Promise<void> {
 function onMenuAction(action: MenuAction): void {
   const win = BrowserWindow.getFocusedWindow() ?? mainWindow;
   if (!win) return;
-  const run = action === 'print-to-pdf' ? printCurrentViewToPdf(win) : loadDemoWorkshop(win);
+  const run =
+    action === 'load-demo' ? loadDemoWorkshop(win) : printCurrentViewToPdf(win, action === 'print-to-pdf-letter' ? 'Letter' : 'A4').then(() => undefined);
   run.catch((err: unknown) => {
     dialog.showErrorBox(PRODUCT_NAME, `That did not work: ${err instanceof Error ? err.message : String(err)}`);
   });
@@ -125,7 +131,16 @@ function start(): void {
 
     const dataDir = resolveDataDir(process.argv, process.env) ?? app.getPath('userData');
     try {
-      backend = openBackend({ dataDir, host: 'desktop', version: app.getVersion() });
+      backend = openBackend({
+        dataDir,
+        host: 'desktop',
+        version: app.getVersion(),
+        // The screens' Print button: the window is looked up when asked, since the store opens first.
+        print: (pageSize) => {
+          const win = BrowserWindow.getFocusedWindow() ?? mainWindow;
+          return win ? printCurrentViewToPdf(win, pageSize) : Promise.resolve({ saved: false, path: null });
+        },
+      });
     } catch (err) {
       dialog.showErrorBox(PRODUCT_NAME, `The workshop store in ${dataDir} could not be opened. ${err instanceof Error ? err.message : String(err)}`);
       app.exit(1);

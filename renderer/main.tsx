@@ -5,6 +5,7 @@ import { App } from './app/App.js';
 import { bridge } from './app/bridge.js';
 import { guardLinks } from './app/links.js';
 import './styles/app.css';
+import './styles/sheet.css';
 
 // Read the access key (and clear it from the address bar) before anything renders.
 bridge();

@@ -9,7 +9,7 @@ export function verdictLine(report: SetupReport): { verdict: Verdict; line: stri
   const worst = `worst reserve ratio ${num(report.worstReserveRatio)} at ${num(report.worstReserveRpm, 0)} rpm`;
   return {
     verdict: report.verdict,
-    line: `${report.verdict}: ${count('pass')} pass, ${count('caution')} caution, ${count('fail')} fail; ${worst}.`,
+    line: `${count('pass')} checks fine, ${count('caution')} to take care over, ${count('fail')} not like this; ${worst}.`,
   };
 }
 

@@ -8,6 +8,7 @@ import { comparisonInput, conditionInputs, engineSpec, existingSetupSpec, planSe
 import { buildDeck, circuitFromReport, DeckError, ExportError, type Scenario } from '../spice/index.js';
 import { choiceFlag, intFlag, numberFlag, onePositional, onlyFlags, type ParsedArgs } from './args.js';
 import { ignitionCautions } from '../safety/cautions.js';
+import { SheetInputError } from '../checklist/errors.js';
 import { CliError } from './errors.js';
 import { toJson } from './output.js';
 import { readBinFile, readPlanFile, type Workshop } from './plan-file.js';
@@ -33,11 +34,11 @@ export function readJsonFile(path: string): unknown {
 }
 
 /** Errors from the adapter and the checker are input problems: exit 2 with their sentence. */
-function guarded<T>(run: () => T): T {
+export function guarded<T>(run: () => T): T {
   try {
     return run();
   } catch (e) {
-    if (e instanceof SetupAdapterError || e instanceof CheckerInputError || e instanceof ExportError) throw new CliError(e.message);
+    if (e instanceof SetupAdapterError || e instanceof CheckerInputError || e instanceof ExportError || e instanceof SheetInputError) throw new CliError(e.message);
     if (e instanceof DeckError) throw new CliError(e.problems.join('\n'));
     throw e;
   }

@@ -1,5 +1,5 @@
 /** The usage text printed by --help. */
-export const usage = `Spark Bench on the command line: the conversion checker with JSON in and out.
+export const usage = `Ignition Planner on the command line: the conversion checker and the wiring sheet, JSON in and out.
 
 Usage:
   npm run cli -- check <plan.json> [--sweep] [--rpm-points N]
@@ -11,6 +11,11 @@ Usage:
   npm run cli -- netlist <plan.json> --rpm R [--candidate N] [--scenario break|fouled|cd|charge] [--coupling K]
       Print an ngspice deck for one setup at R rpm: candidate N (1 to 3; 0 = the existing setup;
       default 1). Run it with: ngspice -b deck.cir
+  npm run cli -- checklist <plan.json> [--candidate N] [--format json|html] [--out FILE]
+      Write the wiring sheet for candidate N (1 to 3, default 1): the cautions, the steps in order
+      with the terminals, the expected readings with their bands and likely causes, and the wiring
+      diagram. --format html writes one printable page (styles inlined, no script). --out writes
+      to FILE instead of printing.
   npm run cli -- --help
 
 Files are described in README.md (section "Command line"); an example is test/fixtures/plan-example.json.

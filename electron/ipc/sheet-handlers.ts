@@ -14,18 +14,12 @@ import type { Repositories } from '../../db/repositories/index.js';
 import { buildSheet, judgeReading, sheetProgress, stepForQuantity } from '../checklist/index.js';
 import { SheetInputError } from '../checklist/errors.js';
 import type { Sheet, SheetProgress, TakenReading } from '../checklist/types.js';
-import { sheetInput } from '../setup/sheet.js';
+import { localDate, sheetInput } from '../setup/sheet.js';
 import type { SheetAnswer } from './channels.js';
 import { adapting } from './check-handlers.js';
 import { AppFailure } from './failure.js';
 
 const RANK: Record<PlanStatus, number> = { draft: 0, checked: 1, wired: 2, done: 3 };
-
-/** Today in the local calendar, YYYY-MM-DD: the date printed on the sheet. */
-export function localDate(d = new Date()): string {
-  const two = (n: number): string => String(n).padStart(2, '0');
-  return `${d.getFullYear()}-${two(d.getMonth() + 1)}-${two(d.getDate())}`;
-}
 
 type Built = { plan: Plan; sheet: Sheet; readings: Reading[] };
 

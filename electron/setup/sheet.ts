@@ -10,6 +10,12 @@ import { compareSetups } from '../checker/index.js';
 import type { SheetInput } from '../checklist/types.js';
 import { comparisonInput, planSetupSpec } from './setups.js';
 
+/** Today in the local calendar, YYYY-MM-DD: the date printed on the sheet. */
+export function localDate(d = new Date()): string {
+  const two = (n: number): string => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${two(d.getMonth() + 1)}-${two(d.getDate())}`;
+}
+
 export function sheetInput(engine: Engine, plan: Plan, parts: readonly Part[], readings: readonly Reading[], printedOn: string): SheetInput {
   const input = comparisonInput(engine, [plan], parts, new Map([[plan.id, readings]]));
   const compared = compareSetups(input);

@@ -6,7 +6,7 @@
  */
 import type { MenuItemConstructorOptions } from 'electron';
 
-export const menuActions = ['print-to-pdf', 'load-demo'] as const;
+export const menuActions = ['print-to-pdf', 'print-to-pdf-letter', 'load-demo'] as const;
 export type MenuAction = (typeof menuActions)[number];
 
 export function menuTemplate(onAction: (action: MenuAction) => void, platform: string = process.platform): MenuItemConstructorOptions[] {
@@ -14,7 +14,8 @@ export function menuTemplate(onAction: (action: MenuAction) => void, platform: s
   const fileMenu: MenuItemConstructorOptions = {
     label: 'File',
     submenu: [
-      { id: 'print-to-pdf', label: 'Print This View to PDF…', accelerator: 'CmdOrCtrl+P', click: () => onAction('print-to-pdf') },
+      { id: 'print-to-pdf', label: 'Print This View to PDF (A4)…', accelerator: 'CmdOrCtrl+P', click: () => onAction('print-to-pdf') },
+      { id: 'print-to-pdf-letter', label: 'Print This View to PDF (Letter)…', accelerator: 'CmdOrCtrl+Shift+P', click: () => onAction('print-to-pdf-letter') },
       { type: 'separator' },
       { id: 'load-demo', label: 'Load Demo Workshop', click: () => onAction('load-demo') },
       { type: 'separator' },

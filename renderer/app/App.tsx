@@ -8,12 +8,13 @@ import type { ResponseOf } from '../../electron/ipc/channels.js';
 import { EngineEditor } from '../screens/engines/EngineEditor.js';
 import { EngineList } from '../screens/engines/EngineList.js';
 import { PartsScreen } from '../screens/parts/PartsScreen.js';
+import { SheetScreen } from '../screens/sheet/SheetScreen.js';
 import { WeighScreen } from '../screens/weigh/WeighScreen.js';
+import { loadBenchPlan, saveBenchPlan, type BenchPlan } from './bench-plan.js';
 import { call } from './bridge.js';
 import { loadCurrentEngine, saveCurrentEngine, type CurrentEngine } from './current-engine.js';
 import { DemoLoader } from './DemoLoader.js';
 import { Confirm } from './Dialog.js';
-import { LaterScreen, laterText } from './LaterScreen.js';
 import { LeaveGuardContext, type LeaveCheck, type LeaveGuard } from './leave-guard.js';
 import { Notice, type NoticeKind } from './Notice.js';
 import { screenOf, screens, type Route } from './routes.js';
@@ -24,6 +25,7 @@ type Flash = { kind: NoticeKind; text: string } | null;
 export function App(): ReactNode {
   const [route, setRoute] = useState<Route>({ to: 'engines' });
   const [current, setCurrentState] = useState<CurrentEngine | null>(loadCurrentEngine);
+  const [bench, setBenchState] = useState<BenchPlan | null>(loadBenchPlan);
   const [pending, setPending] = useState<{ route: Route; what: string } | null>(null);
   const [flash, setFlash] = useState<Flash>(null);
   const [listVersion, setListVersion] = useState(0);
@@ -46,6 +48,11 @@ export function App(): ReactNode {
   const setCurrent = useCallback((c: CurrentEngine | null) => {
     setCurrentState(c);
     saveCurrentEngine(c);
+  }, []);
+
+  const setBench = useCallback((p: BenchPlan | null) => {
+    setBenchState(p);
+    saveBenchPlan(p);
   }, []);
 
   const go = useCallback((r: Route) => {
@@ -81,11 +88,29 @@ export function App(): ReactNode {
     // Only on start: later changes come from the screens themselves.
   }, []);
 
+  // The same for the plan on the bench.
+  useEffect(() => {
+    if (!bench) return;
+    void call('plans.get', { id: bench.id }).then((r) => {
+      if (r.ok && (r.value.name !== bench.name || r.value.engineId !== bench.engineId)) setBench({ id: r.value.id, name: r.value.name, engineId: r.value.engineId });
+      if (!r.ok && r.error.code === 'NOT_FOUND') setBench(null);
+    });
+  }, []);
+
   const active = screenOf(route);
   let screen: ReactNode;
   switch (route.to) {
     case 'engines':
-      screen = <EngineList navigate={navigate} version={listVersion} onDeleted={(id) => current?.id === id && setCurrent(null)} />;
+      screen = (
+        <EngineList
+          navigate={navigate}
+          version={listVersion}
+          onDeleted={(id) => {
+            if (current?.id === id) setCurrent(null);
+            if (bench?.engineId === id) setBench(null);
+          }}
+        />
+      );
       break;
     case 'engine':
     case 'new-engine':
@@ -98,6 +123,7 @@ export function App(): ReactNode {
           onOpened={(e) => setCurrent({ id: e.id, name: e.name })}
           onDeleted={(id) => {
             if (current?.id === id) setCurrent(null);
+            if (bench?.engineId === id) setBench(null);
             setFlash({ kind: 'done', text: 'The engine was deleted.' });
           }}
         />
@@ -110,7 +136,7 @@ export function App(): ReactNode {
       screen = <WeighScreen current={current} onEngineChosen={setCurrent} navigate={navigate} />;
       break;
     case 'sheet':
-      screen = <LaterScreen title="Wiring sheet" what={laterText.sheet} />;
+      screen = <SheetScreen planId={route.planId ?? null} current={current} bench={bench} onEngineChosen={setCurrent} onPlanChosen={setBench} navigate={navigate} />;
       break;
   }
 
@@ -132,6 +158,11 @@ export function App(): ReactNode {
                 <span className="chip-label">Working on:</span> no engine chosen yet
               </span>
             )}
+            {bench ? (
+              <button type="button" className="chip" onClick={() => navigate({ to: 'sheet', planId: bench.id })} data-testid="bench-plan" title="Open the wiring sheet of the plan on the bench">
+                <span className="chip-label">Plan on the bench:</span> {bench.name}
+              </button>
+            ) : null}
           </div>
           <div className="tools">
             <UnitToggle />

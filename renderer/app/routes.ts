@@ -7,7 +7,7 @@ export type Route =
   | { to: 'new-engine' }
   | { to: 'parts'; part?: { id: number } | { newKind: PartKind } }
   | { to: 'combination' }
-  | { to: 'sheet' };
+  | { to: 'sheet'; planId?: number };
 
 export type Navigate = (route: Route) => void;
 

@@ -290,7 +290,7 @@ describe('header', () => {
     const r = c.input.report;
     expect(h.verdict.verdict).toBe(r.verdict);
     const n = (v: string): number => r.rules.filter((x) => x.verdict === v).length;
-    expect(h.verdict.line).toContain(`${n('pass')} pass, ${n('caution')} caution, ${n('fail')} fail`);
+    expect(h.verdict.line).toContain(`${n('pass')} checks fine, ${n('caution')} to take care over, ${n('fail')} not like this`);
     expect(h.verdict.line).toContain(r.worstReserveRatio.toFixed(2));
     expect(h.printedOn).toBe('2024-05-01');
     expect(h.existingLine).toMatch(/^Points; Canister coil, 1\.5 ohm/);

@@ -11,9 +11,13 @@ const rendererDir = path.join(projectRoot, 'renderer');
 const allowedPackages = new Set(['react', 'react-dom/client', 'react/jsx-runtime', 'zod']);
 const allowedShared = new Set([
   path.join(projectRoot, 'db', 'schema.ts'),
+  // The working-condition descriptors schema.ts builds its conditions from (and re-exports); they import nothing.
+  path.join(projectRoot, 'db', 'conditions.ts'),
   path.join(projectRoot, 'electron', 'ipc', 'channels.ts'),
   // The checker answers' shapes; channels.ts re-exports them, and they import only zod.
   path.join(projectRoot, 'electron', 'ipc', 'check-shapes.ts'),
+  // The wiring sheet's shapes; channels.ts re-exports them, and they import only zod.
+  path.join(projectRoot, 'electron', 'ipc', 'sheet-shapes.ts'),
 ]);
 
 function sourceFiles(dir: string): string[] {

@@ -17,12 +17,13 @@ describe('menuTemplate', () => {
       const seen: MenuAction[] = [];
       const all = flatten(menuTemplate((a) => seen.push(a), platform));
       for (const item of all.filter((i) => i.click)) (item.click as () => void)();
-      expect(seen.sort()).toEqual(['load-demo', 'print-to-pdf']);
+      expect(seen.sort()).toEqual(['load-demo', 'print-to-pdf', 'print-to-pdf-letter']);
       const roles = all.map((i) => i.role).filter(Boolean);
       expect(roles).not.toContain('reload');
       expect(roles).not.toContain('forceReload');
       for (const r of ['undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'quit']) expect(roles).toContain(r);
       expect(all.find((i) => i.id === 'print-to-pdf')?.accelerator).toBe('CmdOrCtrl+P');
+      expect(all.find((i) => i.id === 'print-to-pdf-letter')?.accelerator).toBe('CmdOrCtrl+Shift+P');
     });
   }
 });

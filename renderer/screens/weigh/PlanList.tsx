@@ -12,12 +12,13 @@ type Props = {
   onTick: (id: number, on: boolean) => void;
   onEdit: (plan: Plan) => void;
   onNew: () => void;
+  onOpenSheet: (plan: Plan) => void;
   editingId: number | null | 'new';
 };
 
 const partName = (parts: readonly Part[], id: number | null, none: string): string => (id === null ? none : (parts.find((p) => p.id === id)?.name ?? `part no. ${id}`));
 
-export function PlanList({ plans, parts, ticked, onTick, onEdit, onNew, editingId }: Props): ReactNode {
+export function PlanList({ plans, parts, ticked, onTick, onEdit, onNew, onOpenSheet, editingId }: Props): ReactNode {
   const full = ticked.length >= MAX_TICKED;
   return (
     <section className="panel plans-panel" aria-labelledby="plans-title">
@@ -51,6 +52,9 @@ export function PlanList({ plans, parts, ticked, onTick, onEdit, onNew, editingI
                     {partName(parts, p.moduleId, 'points kept')} · {partName(parts, p.coilId, 'coil kept')} · {partName(parts, p.ballastId, 'no ballast')}
                   </span>
                   <span className="plan-status">{statusWords[p.status]}</span>
+                  <button type="button" className="link" onClick={() => onOpenSheet(p)} aria-label={`Open its wiring sheet: ${p.name}`}>
+                    Open its wiring sheet
+                  </button>
                   <button type="button" className="small" onClick={() => onEdit(p)} disabled={editingId === p.id} aria-label={`Change the plan ${p.name}`}>
                     Change
                   </button>

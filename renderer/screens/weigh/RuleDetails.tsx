@@ -42,10 +42,10 @@ export function RuleOverview({ setups }: { setups: readonly ShownSetup[] }): Rea
   );
 }
 
-function RuleItem({ rule, testId }: { rule: ShownRule; testId: string }): ReactNode {
+function RuleItem({ rule, testId, printCopy }: { rule: ShownRule; testId?: string; printCopy?: boolean }): ReactNode {
   const [unit] = useGapUnit();
   return (
-    <li className={`rule rule-${rule.verdict}`} data-testid={testId} data-rule={rule.id}>
+    <li className={`${printCopy ? 'rule-copy' : 'rule'} rule-${rule.verdict}`} data-testid={testId} data-rule={printCopy ? undefined : rule.id}>
       <div className="rule-head">
         <VerdictBadge verdict={rule.verdict} />
         <h4>{rule.title}</h4>
@@ -98,6 +98,19 @@ export function RuleDetails({ setup, index }: { setup: ShownSetup; index: number
             ))}
           </ul>
         </details>
+      ) : null}
+      {/* CSS cannot open a <details> for the print: the print gets its own copy, never folded. */}
+      {fine.length > 0 ? (
+        <div className="print-copy" aria-hidden="true">
+          <p className="print-copy-head">
+            {fine.length} {fine.length === 1 ? 'check' : 'checks'} came out fine:
+          </p>
+          <ul className="rules">
+            {fine.map((r) => (
+              <RuleItem key={r.id} rule={r} printCopy />
+            ))}
+          </ul>
+        </div>
       ) : null}
     </section>
   );

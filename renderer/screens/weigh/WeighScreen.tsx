@@ -23,6 +23,7 @@ import { SetupCards } from './SetupCards.js';
 import { ShelfList } from './ShelfList.js';
 import { useComparison, useEngine, useEnginesAndParts, useShelfSearch } from './use-weigh-data.js';
 import { WeighCharts } from './WeighCharts.js';
+import { todayText } from '../../app/today.js';
 import { figureText } from './words.js';
 
 type Props = { current: CurrentEngine | null; onEngineChosen: (e: CurrentEngine) => void; navigate: Navigate };
@@ -123,7 +124,12 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
         <h1 id="weigh-title" tabIndex={-1}>
           Weigh a combination
         </h1>
-        {e ? <span className="print-only">Engine: {e.name}</span> : null}
+        {e ? (
+          <span className="print-only" data-testid="weigh-print-head">
+            Engine: {e.name}
+            {e.yearText || e.modelText ? `, ${[e.yearText, e.modelText].filter(Boolean).join(' ')}` : ''}; {e.cylinders} cylinders, {e.systemVoltageV} V, {e.earthPolarity} earth. Printed on {todayText()}.
+          </span>
+        ) : null}
         {engines.value && engines.value.length > 0 ? (
           <div className="field engine-pick">
             <label htmlFor="weigh-engine">Engine</label>
@@ -162,6 +168,7 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
             onTick={(id, on) => setTicked((t) => ({ ids: on ? (t.ids.includes(id) || t.ids.length >= MAX_TICKED ? t.ids : [...t.ids, id]) : t.ids.filter((x) => x !== id), for: t.for }))}
             onEdit={editPlan}
             onNew={newPlan}
+            onOpenSheet={(p) => navigate({ to: 'sheet', planId: p.id })}
             editingId={editor ? (editor.planId ?? 'new') : null}
           />
           {editor ? (
@@ -187,6 +194,16 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
               <>
                 {answer.candidates.length === 0 ? <p className="quiet">No plan is ticked: this is the ignition fitted now on its own.</p> : null}
                 <SetupCards setups={setups} margin={answer.marginRatio} />
+                <div className="print-copy conditions-copy" aria-hidden="true">
+                  <p className="print-copy-head">Working conditions these figures assume:</p>
+                  <ul>
+                    {answer.conditions.map((c) => (
+                      <li key={c.name}>
+                        {c.name}: {figureText(c.value, c.unit, unit)} ({c.measured ? 'measured' : (c.source ?? '')})
+                      </li>
+                    ))}
+                  </ul>
+                </div>
                 <details className="conditions-used">
                   <summary>Working conditions these figures assume</summary>
                   <ul>
