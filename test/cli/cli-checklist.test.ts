@@ -10,35 +10,10 @@ import { join } from 'node:path';
 import { chromium } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoPlans } from '../../db/demo/plans.js';
-import { demoEngines, demoPart, engineOf, existingOf } from './demo-plan.js';
+import { demoEngines, demoPart, planFileOf } from './demo-plan.js';
 import { runCli, tempFile } from './run-cli.js';
 
 const units = ['V', 'A', 'ohm', 'kohm', 'deg', 'rpm', 'mm'];
-
-/** A plan file holding one demo plan as its only candidate, every part written inline. */
-function planFileOf(plan: (typeof demoPlans)[number]): Record<string, unknown> {
-  const engine = demoEngines.find((e) => e.name === plan.engine)!;
-  const part = (kind: Parameters<typeof demoPart>[0], name: string | null) => (name ? demoPart(kind, name) : null);
-  return {
-    engine: engineOf(engine),
-    existing: existingOf(engine),
-    candidates: [
-      {
-        name: plan.name,
-        module: part('module', plan.module),
-        coil: part('coil', plan.coil),
-        ballast: part('ballast', plan.ballast),
-        crankingBypass: plan.crankingBypass,
-        moduleFeed: plan.moduleFeed,
-        tach: part('tach', plan.tach),
-        leads: part('leads', plan.leads),
-        plug: part('plug', plan.plug),
-        plugGapMm: plan.plugGapMm,
-      },
-    ],
-    options: { rpmPoints: 60 },
-  };
-}
 
 /** The first cautions' words, as workshop practice puts them first (our own sentence, checked for presence). */
 const FIRST_CAUTION = 'Disconnect the battery earth lead';

@@ -1,5 +1,6 @@
 /** Plan and bin files for the command line, written from the demo workshop's records. */
 import { demoEngines, demoParts, type DemoEngine } from '../../db/demo/index.js';
+import type { DemoPlan } from '../../db/demo/plans.js';
 import type { PartInput } from '../../db/schema.js';
 
 export function demoPart(kind: PartInput['kind'], name: string): PartInput {
@@ -45,6 +46,31 @@ export function planWithModules(e: DemoEngine, moduleNames: readonly string[]): 
       moduleFeed: 'switched-15',
       plugGapMm: e.existing.plugGapMm,
     })),
+    options: { rpmPoints: 60 },
+  };
+}
+
+/** A plan file holding one demo plan as its only candidate, every part written inline. */
+export function planFileOf(plan: DemoPlan): Record<string, unknown> {
+  const engine = demoEngines.find((e) => e.name === plan.engine)!;
+  const part = (kind: Parameters<typeof demoPart>[0], name: string | null) => (name ? demoPart(kind, name) : null);
+  return {
+    engine: engineOf(engine),
+    existing: existingOf(engine),
+    candidates: [
+      {
+        name: plan.name,
+        module: part('module', plan.module),
+        coil: part('coil', plan.coil),
+        ballast: part('ballast', plan.ballast),
+        crankingBypass: plan.crankingBypass,
+        moduleFeed: plan.moduleFeed,
+        tach: part('tach', plan.tach),
+        leads: part('leads', plan.leads),
+        plug: part('plug', plan.plug),
+        plugGapMm: plan.plugGapMm,
+      },
+    ],
     options: { rpmPoints: 60 },
   };
 }

@@ -17,7 +17,7 @@ import type { Navigate } from '../../app/routes.js';
 import { statusWords } from '../../sheet/format.js';
 import type { Band, JudgedReading, SheetStep } from '../../sheet/model.js';
 import { SheetDocument, type PageSize } from '../../sheet/SheetDocument.js';
-import { PrintBar } from './PrintBar.js';
+import { PrintBar } from '../../app/PrintBar.js';
 import { ReadingEntry } from './ReadingEntry.js';
 import { TickBox, TickError, type TickState } from './TickBox.js';
 import { useEngines, usePlans, useSheet } from './use-sheet-data.js';
@@ -272,6 +272,7 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
               <span className="quiet"> ({reachedWords[answer.progress.reached]})</span>
             </p>
             <PrintBar
+              what="The sheet"
               pageSize={pageSize}
               onPageSize={(s) => {
                 setPageSize(s);

@@ -10,7 +10,9 @@ import type { ShelfSuggestion, ShownSetup } from '../../../electron/ipc/channels
 import type { CurrentEngine } from '../../app/current-engine.js';
 import { Confirm } from '../../app/Dialog.js';
 import { useLeaveGuard } from '../../app/leave-guard.js';
-import { Notice } from '../../app/Notice.js';
+import { Notice, type NoticeKind } from '../../app/Notice.js';
+import { PrintBar } from '../../app/PrintBar.js';
+import type { PageSize } from '../../sheet/SheetDocument.js';
 import type { Navigate } from '../../app/routes.js';
 import { useGapUnit } from '../../app/units.js';
 import { Cautions } from './Cautions.js';
@@ -42,6 +44,8 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
   const [editing, setEditing] = useState({ dirty: false, name: '' });
   const [ask, setAsk] = useState<{ then: () => void } | null>(null);
   const [done, setDone] = useState<string | null>(null);
+  const [pageSize, setPageSize] = useState<PageSize>('A4');
+  const [printed, setPrinted] = useState<{ kind: NoticeKind; text: string } | null>(null);
 
   const ready = plansFor === engineId && ticked.for === engineId;
   const comparison = useComparison(engineId, ticked.ids, ready, plansVersion);
@@ -187,7 +191,15 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
           ) : null}
 
           <section className="results" aria-labelledby="compare-title" aria-busy={comparison.busy || undefined} data-testid="comparison">
-            <h2 id="compare-title">How they compare</h2>
+            <div className="results-head">
+              <h2 id="compare-title">How they compare</h2>
+              {answer ? <PrintBar what="The comparison" pageSize={pageSize} onPageSize={setPageSize} onResult={(kind, text) => setPrinted({ kind, text })} /> : null}
+            </div>
+            {printed ? (
+              <Notice kind={printed.kind} onDismiss={() => setPrinted(null)} testId="weigh-printed">
+                {printed.text}
+              </Notice>
+            ) : null}
             {comparison.problem ? <Notice kind="problem">{comparison.problem}</Notice> : null}
             {!answer && comparison.busy ? <p className="quiet">Weighing…</p> : null}
             {answer ? (
