@@ -6,6 +6,8 @@ export default defineConfig({
     testTimeout: 60_000,
     hookTimeout: 120_000,
     pool: 'forks',
+    // A page on a loaded 2-core machine can take seconds to answer; expect.poll waits up to this long.
+    expect: { poll: { timeout: 15_000, interval: 100 } },
     reporters: ['default'],
   },
 });

@@ -7,6 +7,9 @@
  * adapter: every value that crosses a boundary is parsed with one of them.
  */
 import { z } from 'zod';
+import { conditionDescriptors, conditionKeys, rangeMessage, type ConditionDescriptor, type ConditionKey } from './conditions.js';
+export { conditionByKey, conditionDescriptors, conditionGroupTitles, conditionKeys, conditionText, rangeMessage, toStored, toTyped } from './conditions.js';
+export type { ConditionContext, ConditionDescriptor, ConditionGroup, ConditionKey, DefaultSource } from './conditions.js';
 
 const id = z.number().int().positive();
 const text = (max: number) => z.string().max(max, `Keep this under ${max} characters.`);
@@ -32,15 +35,31 @@ export const advancePoint = z.object({
   advanceDeg: z.number().finite().min(-10, 'Advance below -10 degrees is not plausible.').max(60, 'Advance above 60 degrees is not plausible.'),
 });
 
-/** Operating conditions the user may override per engine; absent means "use the default". */
-export const conditionOverrides = z.object({
-  runningSupplyV: positive('Running supply', 20).optional(),
-  crankingSupplyV: positive('Cranking supply', 20).optional(),
-  harnessResistanceOhm: nonNegative('Harness resistance', 5).optional(),
-  ambientC: numberOf('Ambient temperature').min(-40, 'Ambient below -40 °C is not plausible.').max(60, 'Ambient above 60 °C is not plausible.').optional(),
-  underBonnetC: numberOf('Under-bonnet temperature').min(-40, 'Under-bonnet below -40 °C is not plausible.').max(150, 'Under-bonnet above 150 °C is not plausible.').optional(),
-  volumetricEfficiency: numberOf('Volumetric efficiency').min(0.3, 'Volumetric efficiency below 0.3 is not plausible.').max(1.3, 'Volumetric efficiency above 1.3 is not plausible.').optional(),
-});
+/**
+ * Operating conditions the user may override per engine; absent means "use the default". Built
+ * from the descriptors in db/conditions.ts (words, typed unit, range with its reason): every key
+ * optional, a value outside its range refused with the reason, an unknown key refused.
+ */
+function conditionNumber(d: ConditionDescriptor): z.ZodNumber {
+  const message = rangeMessage(d);
+  const base = numberOf(d.label);
+  return (d.minExclusive ? base.gt(d.min, message) : base.min(d.min, message)).max(d.max, message);
+}
+export const conditionOverrides = z.strictObject(
+  Object.fromEntries(conditionDescriptors.map((d) => [d.key, conditionNumber(d).optional()])) as { [K in ConditionKey]: z.ZodOptional<z.ZodNumber> },
+  { error: (issue) => (issue.code === 'unrecognized_keys' ? unknownConditionMessage(issue.keys) : undefined) },
+);
+
+function unknownConditionMessage(keys: readonly string[]): string {
+  return `Unknown working condition ${keys.map((k) => `"${k}"`).join(', ')}: the conditions are ${conditionKeys.join(', ')}.`;
+}
+
+/**
+ * Which coil terminal goes to the supply side: as marked for this car's earth (on negative earth
+ * + / SW / 15 to the feed; on positive earth - / CB / 1 to the feed), or the other way round.
+ */
+export const coilWirings = ['as-marked-for-earth', 'reversed'] as const;
+export const coilWiring = z.enum(coilWirings, { error: 'The coil is wired as marked for this earth, or reversed.' });
 
 /** The ignition the engine has today: the baseline every candidate is compared with. */
 export const existingSetup = z.object({
@@ -57,6 +76,8 @@ export const existingSetup = z.object({
   /** Magneto only: the break current it reaches at full output, and the rpm where it gets there. */
   magnetoRatedCurrentA: positive('Magneto rated current', 10).nullable().optional(),
   magnetoFullOutputRpm: positive('Magneto full-output rpm', 10000).nullable().optional(),
+  /** Absent in rows stored before it existed: read as 'as-marked-for-earth'. */
+  coilWiring: coilWiring.optional(),
 });
 
 const engineFields = z.object({
@@ -151,10 +172,29 @@ export const coilFields = z.object({
   forBallast: z.boolean(),
   ratedVoltageV: systemVoltage,
   maxDissipationW: positive('Maximum dissipation', 500).nullable(),
+  /**
+   * Rated secondary (insulation) voltage in kV, as printed on a coil box; absent or null means the
+   * checker's labelled default (about 35 kV for a canister coil, from memory).
+   */
+  ratedSecondaryKv: positive('Rated secondary voltage', 100).nullable().optional(),
 });
-export const coil = coilFields.refine((c) => c.turnsRatio !== null || c.secondaryInductanceH !== null, {
-  path: ['turnsRatio'],
-  message: 'Give the turns ratio or the secondary inductance.',
+/** How far a given turns ratio may stray from sqrt(Ls/Lp) when both are given (ideal-transformer relation, n^2 = Ls/Lp). */
+export const TURNS_RATIO_TOLERANCE = 0.1;
+export const coil = coilFields.superRefine((c, ctx) => {
+  if (c.turnsRatio === null && c.secondaryInductanceH === null) {
+    ctx.addIssue({ code: 'custom', path: ['turnsRatio'], message: 'Give the turns ratio or the secondary inductance.' });
+    return;
+  }
+  if (c.turnsRatio !== null && c.secondaryInductanceH !== null && c.primaryInductanceH > 0) {
+    const fromL = Math.sqrt(c.secondaryInductanceH / c.primaryInductanceH);
+    if (Math.abs(c.turnsRatio - fromL) > TURNS_RATIO_TOLERANCE * fromL) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['turnsRatio'],
+        message: `The turns ratio ${c.turnsRatio} disagrees with the inductances: the square root of secondary over primary inductance gives ${fromL.toFixed(0)}. Correct one of them, or leave the secondary inductance blank.`,
+      });
+    }
+  }
 });
 
 export const ballast = z.object({
@@ -206,6 +246,9 @@ export const ignitionModule = moduleFields.superRefine((m, ctx) => {
   }
   if (m.moduleType === 'breakerless-current-limited' && (m.currentLimitA === null || m.maxDutyFraction === null)) {
     ctx.addIssue({ code: 'custom', path: ['currentLimitA'], message: 'A current-limited module needs its current limit and maximum duty.' });
+  }
+  if (m.currentLimitA !== null && m.currentLimitA > m.maxCurrentA) {
+    ctx.addIssue({ code: 'custom', path: ['currentLimitA'], message: `The current limit cannot be above the module's own maximum current (${m.maxCurrentA} A).` });
   }
 });
 
@@ -259,12 +302,20 @@ export const planFields = z.object({
   crankingBypass: z.boolean(),
   /** Where the module takes its own supply: straight from terminal 15, or (wrongly) after the ballast. */
   moduleFeed: z.enum(['switched-15', 'after-ballast']),
+  /** Which coil terminal goes to the supply side; absent means 'as-marked-for-earth'. */
+  coilWiring: coilWiring.optional(),
   tachId: id.nullable(),
   leadsId: id.nullable(),
   plugId: id.nullable(),
   plugGapMm: positive('Plug gap', 3),
 });
 export const planInput = planFields;
+/**
+ * What an edit of a plan sends: the same fields, the status optional. The status moves with the
+ * work (weighed, wired, done) and by hand through its own request, so an editor that was opened
+ * before the plan moved on leaves it out and cannot put the old status back.
+ */
+export const planUpdateInput = planFields.extend({ status: planStatus.optional() });
 export const plan = planFields.extend({ id, updatedAt: z.string() });
 
 // ---------------------------------------------------------------------------------------------
@@ -484,6 +535,7 @@ export const sheetTick = z.strictObject({ planId: id, stepKey, tickedOn: z.strin
 export type AdvancePoint = z.infer<typeof advancePoint>;
 export type ConditionOverrides = z.infer<typeof conditionOverrides>;
 export type ExistingSetup = z.infer<typeof existingSetup>;
+export type CoilWiringChoice = z.infer<typeof coilWiring>;
 export type EngineInput = z.infer<typeof engineInput>;
 export type Engine = z.infer<typeof engine>;
 export type Coil = z.infer<typeof coil>;
@@ -496,6 +548,7 @@ export type PartInput = z.infer<typeof partInput>;
 export type Part = z.infer<typeof part>;
 export type PartKind = z.infer<typeof partKind>;
 export type PlanInput = z.infer<typeof planInput>;
+export type PlanUpdateInput = z.infer<typeof planUpdateInput>;
 export type Plan = z.infer<typeof plan>;
 export type PlanStatus = z.infer<typeof planStatus>;
 export type ReadingInput = z.infer<typeof readingInput>;

@@ -4,8 +4,9 @@
  */
 import { migration001 } from './001-initial.js';
 import { migration002 } from './002-sheet-ticks-and-reading-units.js';
+import { migration003 } from './003-coil-wiring.js';
 import type { Migration } from './types.js';
 
-export const migrations: readonly Migration[] = [migration001, migration002];
+export const migrations: readonly Migration[] = [migration001, migration002, migration003];
 
 export type { Migration } from './types.js';

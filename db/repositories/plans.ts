@@ -3,7 +3,7 @@
  * Each part reference must name a stored part of the right kind (a coil in `coilId`, and so on).
  */
 import { z } from 'zod';
-import { plan as planSchema, planInput, planStatus, type Plan, type PlanInput, type PlanStatus } from '../schema.js';
+import { plan as planSchema, planInput, planStatus, type Plan, type PlanInput, type PlanStatus, type PlanUpdateInput } from '../schema.js';
 import { StoreError } from '../errors.js';
 import { INVALID_SENTENCE, nowIso, parseInput, parseStored, partRefChecker, readAll, type RepoContext } from './shared.js';
 
@@ -12,7 +12,8 @@ export type PlansRepository = {
   list(engineId?: number): Plan[];
   get(id: number): Plan;
   create(input: PlanInput): Plan;
-  update(id: number, input: PlanInput): Plan;
+  /** Without a status in `input`, the stored status stays. */
+  update(id: number, input: PlanUpdateInput): Plan;
   /** Sets the status alone (by hand in any direction, or moved forward by the work on the sheet). */
   setStatus(id: number, status: PlanStatus): Plan;
   /** Deletes the plan and its readings together. */
@@ -34,6 +35,7 @@ type PlanRow = {
   plug_id: number | null;
   cranking_bypass: number;
   module_feed: string;
+  coil_wiring: string;
   plug_gap_mm: number;
   updated_at: string;
 };
@@ -41,9 +43,9 @@ type PlanRow = {
 const statusOnly = z.strictObject({ status: z.enum(planStatus.options, { error: 'The status is draft, checked, wired or done.' }) });
 
 const COLUMNS = `engine_id, name, notes, status, module_id, coil_id, ballast_id, tach_id, leads_id, plug_id,
-  cranking_bypass, module_feed, plug_gap_mm`;
+  cranking_bypass, module_feed, coil_wiring, plug_gap_mm`;
 const PARAMS = `@engineId, @name, @notes, @status, @moduleId, @coilId, @ballastId, @tachId, @leadsId, @plugId,
-  @crankingBypass, @moduleFeed, @plugGapMm`;
+  @crankingBypass, @moduleFeed, @coilWiring, @plugGapMm`;
 
 function fromRow(row: PlanRow): Plan {
   return parseStored(planSchema, 'plans', row.id, {
@@ -60,6 +62,7 @@ function fromRow(row: PlanRow): Plan {
     plugId: row.plug_id,
     crankingBypass: row.cranking_bypass === 1,
     moduleFeed: row.module_feed,
+    coilWiring: row.coil_wiring,
     plugGapMm: row.plug_gap_mm,
     updatedAt: row.updated_at,
   });
@@ -69,7 +72,10 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
   const { db } = ctx;
   const checkParts = partRefChecker(db);
   const select = `SELECT id, ${COLUMNS}, updated_at FROM plans`;
-  const s = {
+  // Prepared on first use (as the ticks repository does), so a store opened at an older version can
+  // still build the repositories while its migrations run.
+  let prepared: ReturnType<typeof prepare> | undefined;
+  const prepare = () => ({
     all: db.prepare<[], PlanRow>(`${select} ORDER BY id`),
     byEngine: db.prepare<[number], PlanRow>(`${select} WHERE engine_id = ? ORDER BY id`),
     get: db.prepare<[number], PlanRow>(`${select} WHERE id = ?`),
@@ -80,17 +86,18 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
     readingCount: db.prepare<[number], { n: number }>('SELECT COUNT(*) AS n FROM readings WHERE plan_id = ?'),
     remove: db.prepare('DELETE FROM plans WHERE id = ?'),
     count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM plans'),
-  };
+  });
+  const st = (): ReturnType<typeof prepare> => (prepared ??= prepare());
 
   function read(id: number): Plan {
-    const row = s.get.get(id);
+    const row = st().get.get(id);
     if (!row) throw new StoreError('NOT_FOUND', `There is no plan with id ${id}; it may have been deleted.`);
     return fromRow(row);
   }
 
   function validate(input: unknown): Record<string, unknown> {
     const p = parseInput(planInput, input);
-    if (!s.engineExists.get(p.engineId)) {
+    if (!st().engineExists.get(p.engineId)) {
       throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, { engineId: `There is no engine with id ${p.engineId}.` });
     }
     checkParts([
@@ -101,38 +108,39 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
       { field: 'leadsId', id: p.leadsId, kind: 'leads' },
       { field: 'plugId', id: p.plugId, kind: 'plug' },
     ]);
-    return { ...p, crankingBypass: p.crankingBypass ? 1 : 0, now: nowIso() };
+    return { ...p, crankingBypass: p.crankingBypass ? 1 : 0, coilWiring: p.coilWiring ?? 'as-marked-for-earth', now: nowIso() };
   }
 
   const deleteTx = db.transaction((id: number) => {
     read(id);
-    const readingsDeleted = s.readingCount.get(id)!.n;
-    s.remove.run(id); // readings.plan_id cascades
+    const readingsDeleted = st().readingCount.get(id)!.n;
+    st().remove.run(id); // readings.plan_id cascades
     return { deleted: true as const, readingsDeleted };
   });
 
   return {
     list: (engineId) => {
-      if (engineId === undefined) return readAll(ctx, 'plans', s.all.all(), fromRow);
-      if (!s.engineExists.get(engineId)) throw new StoreError('NOT_FOUND', `There is no engine with id ${engineId}; it may have been deleted.`);
-      return readAll(ctx, 'plans', s.byEngine.all(engineId), fromRow);
+      if (engineId === undefined) return readAll(ctx, 'plans', st().all.all(), fromRow);
+      if (!st().engineExists.get(engineId)) throw new StoreError('NOT_FOUND', `There is no engine with id ${engineId}; it may have been deleted.`);
+      return readAll(ctx, 'plans', st().byEngine.all(engineId), fromRow);
     },
     get: (id) => read(id),
-    create: (input) => db.transaction(() => read(Number(s.insert.run(validate(input)).lastInsertRowid)))(),
+    create: (input) => db.transaction(() => read(Number(st().insert.run(validate(input)).lastInsertRowid)))(),
     update: (id, input) =>
       db.transaction(() => {
-        read(id);
-        s.update.run({ ...validate(input), id });
+        const stored = read(id);
+        const withStatus = typeof input === 'object' && input !== null && (input as { status?: unknown }).status === undefined ? { ...input, status: stored.status } : input;
+        st().update.run({ ...validate(withStatus), id });
         return read(id);
       })(),
     setStatus: (id, status) =>
       db.transaction(() => {
         const { status: s2 } = parseInput(statusOnly, { status });
         read(id);
-        s.setStatus.run({ status: s2, now: nowIso(), id });
+        st().setStatus.run({ status: s2, now: nowIso(), id });
         return read(id);
       })(),
     delete: (id) => deleteTx(id),
-    count: () => s.count.get()!.n,
+    count: () => st().count.get()!.n,
   };
 }

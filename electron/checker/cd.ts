@@ -98,3 +98,49 @@ export function cdSecondaryPeakV(capacitanceF: number, chargeV: number, n: numbe
 export function cdSparkDurationS(primaryInductanceH: number, capacitanceF: number): number {
   return Math.PI * Math.sqrt(Math.max(0, primaryInductanceH * capacitanceF));
 }
+
+/**
+ * Secondary rise time of a CD firing: the time the transfer loop takes to its first peak. For an
+ * underdamped series RLC driven by a step that is the peak time t_p = pi / omega_d,
+ * omega_d = omega_0 sqrt(1 - zeta^2), omega_0 = 1 / sqrt(L_leak C_ser) (Ogata, Modern Control
+ * Engineering, and Nise, Control Systems Engineering: peak time of the second-order step
+ * response). At zeta >= 1 there is no peak: the response creeps up to V_cm, and we take 95 % of
+ * it, three time constants of the slow root s = -omega_0 (zeta - sqrt(zeta^2 - 1)) (our model).
+ * Without leakage (an RC loop) the time is 3 R C_ser; with neither, 0.
+ */
+export function cdRiseTimeS(capacitanceF: number, n: number, secondaryCapacitanceF: number, loop: CdTransferLoop): number {
+  const reflected = n * n * secondaryCapacitanceF;
+  const series = (capacitanceF * reflected) / (capacitanceF + reflected);
+  if (!(series > 0)) return 0;
+  if (!(loop.leakageH > 0)) return 3 * Math.max(0, loop.loopOhm) * series;
+  const w0 = 1 / Math.sqrt(loop.leakageH * series);
+  const zeta = cdTransferDampingRatio(capacitanceF, n, secondaryCapacitanceF, loop);
+  if (zeta < 1) return Math.PI / (w0 * Math.sqrt(1 - zeta * zeta));
+  const slow = w0 * (zeta - Math.sqrt(zeta * zeta - 1));
+  return slow > 0 ? 3 / slow : 0;
+}
+
+/**
+ * Energy a CD firing delivers to the spark over its modelled duration (half a ring period of the
+ * capacitor with the coil primary, `cdSparkDurationS`). Referred to the primary the arc is a
+ * constant counter-voltage V_a = V_arc / n; a lossless LC with a constant counter-voltage swings
+ * the capacitor from V to 2 V_a - V in that half period, so the charge through the arc is
+ * 2 C (V - V_a) and the energy V_a 2 C (V - V_a) (our model), times the transfer efficiency (the
+ * current it delivers). Nothing is delivered when V is at or below V_a.
+ */
+export function cdSparkEnergyJ(capacitanceF: number, chargeV: number, n: number, arcV: number, efficiency: number): number {
+  const va = arcV / Math.max(1e-9, n);
+  if (!(chargeV > va) || !(capacitanceF > 0)) return 0;
+  return efficiency * va * 2 * capacitanceF * (chargeV - va);
+}
+
+/**
+ * Charger recharge time and the rpm above which the capacitor no longer fills: the firing period
+ * falls below 0.5 C V^2 / P at rpm = 60 k / (cylinders T_rech), k = 2 on a four-stroke and 1 on a
+ * two-stroke (sparks per revolution cylinders / k).
+ */
+export function cdEnergyFallsFromRpm(capacitanceF: number, chargeV: number, chargerPowerW: number, cylinders: number, twoStroke: boolean): number {
+  const t = rechargeTimeS(capacitanceF, chargeV, chargerPowerW);
+  if (!(t > 0) || !Number.isFinite(t)) return t > 0 ? 0 : Infinity;
+  return (60 * (twoStroke ? 1 : 2)) / (Math.max(1, cylinders) * t);
+}

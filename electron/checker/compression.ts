@@ -2,6 +2,9 @@
  * Compression of the charge from inlet closing (taken at BDC) to the spark: polytropic,
  * p = p1 (V1/V)^n, T = T1 (V1/V)^(n-1), n = 1.3 (Heywood 1988, from memory). At full load
  * p1 = volumetric efficiency x ambient pressure: the densest charge is the hardest to break down.
+ * The index is a working condition (`polytropicIndex`, default 1.3); this constant is its default.
+ * The charge at inlet closing is warm (the inlet charge temperature) on a running engine and at
+ * ambient on the cranking point (grid.ts): gas density (p1/T1)(V1/V) sets the breakdown.
  */
 
 export const POLYTROPIC_INDEX = 1.3;

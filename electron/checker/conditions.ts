@@ -29,8 +29,12 @@ export const conditionUnits: Record<ConditionName, string> = {
   ballastThermalResistanceKPerW: 'K/W',
   coilDissipationLimitW: 'W',
   currentLimitHoldS: 's',
-  cdRiseRateVPerS: 'V/s',
   marginRatio: '',
+  polytropicIndex: '',
+  couplingK: '',
+  dynamoCutInRpm: 'rpm',
+  restingBatteryV: 'V',
+  secondaryCeilingV: 'V',
 };
 
 /**
@@ -99,9 +103,20 @@ export function defaultConditions(engine: EngineSpec, ambientC = 20): ResolvedCo
     coilDissipationLimitW: d(80, MEMORY),
     // A current-limited module holds the limit a little before it breaks, so the current is surely there.
     currentLimitHoldS: d(0.5e-3, MEMORY),
-    // CD secondary rise: 3 to 10 kV/us.
-    cdRiseRateVPerS: d(5e9, MEMORY),
     marginRatio: d(1.25, PRACTICE),
+    // Compression from inlet closing to the spark, p V^n constant: about 1.3 (Heywood 1988, from memory).
+    polytropicIndex: d(1.3, MEMORY),
+    // Magnetic coupling of primary and secondary: oil-filled canister coils are quoted at 0.98 to
+    // 0.999 (from memory). The CD transfer rings through the leakage 2 (1 - k) Lp (cd.ts).
+    couplingK: d(DEFAULT_COUPLING_K.value, MEMORY),
+    // Engine speed at which a dynamo starts to charge: about 1,000 to 1,200 rpm (from memory).
+    // Only a dynamo car (engine.charging 'dynamo') uses it.
+    dynamoCutInRpm: d(1100, MEMORY),
+    // A healthy battery at rest, neither charging nor loaded: 12.4 V (6.2 V on 6 V), common practice.
+    restingBatteryV: six ? d(6.2, PRACTICE) : d(12.4, PRACTICE),
+    // The secondary a coil is built to give (its insulation rating) when the coil record gives
+    // none: canister coils are rated at 30 to 40 kV (from memory); the middle is taken.
+    secondaryCeilingV: d(35_000, MEMORY),
   };
 }
 
@@ -109,9 +124,39 @@ export function defaultConditions(engine: EngineSpec, ambientC = 20): ResolvedCo
  * Magnetic coupling of primary and secondary in a closed-iron canister coil: oil-filled canister
  * coils are quoted at 0.98 to 0.999 (from memory). Only the capacitive-discharge peak uses it (its
  * fast transfer rings through the leakage inductance 2 (1 - k) Lp); the inductive forms take the
- * coil as ideal. The SPICE exporter draws its coupling element with this same value.
+ * coil as ideal. It is the default of the working condition `couplingK`. The SPICE exporter draws
+ * its coupling element with this same value (an engine's own `couplingK` is not passed to decks yet).
  */
 export const DEFAULT_COUPLING_K: Readonly<Sourced> = Object.freeze(d(0.995, MEMORY));
+
+/**
+ * The range a caller may set each condition to (inclusive), for the app, the plan file and the
+ * checker's own guard. Wide enough for any real installation, narrow enough to refuse a typo.
+ */
+export const conditionRanges: Record<ConditionName, readonly [number, number]> = {
+  runningSupplyV: [4, 16],
+  crankingSupplyV: [2, 14],
+  harnessResistanceOhm: [0, 2],
+  ambientC: [-40, 50],
+  underBonnetC: [-40, 150],
+  volumetricEfficiency: [0.3, 1.2],
+  ambientPressurePa: [50_000, 110_000],
+  inletChargeC: [-40, 150],
+  pointsContactResistanceOhm: [0, 1],
+  secondaryCapacitanceF: [10e-12, 500e-12],
+  transferEfficiency: [0.3, 1],
+  arcVoltageV: [200, 3000],
+  fouledShuntOhm: [10_000, 100e6],
+  ballastThermalResistanceKPerW: [1, 50],
+  coilDissipationLimitW: [10, 300],
+  currentLimitHoldS: [0, 5e-3],
+  marginRatio: [1, 3],
+  polytropicIndex: [1.1, 1.4],
+  couplingK: [0.9, 0.9999],
+  dynamoCutInRpm: [300, 3000],
+  restingBatteryV: [4, 14],
+  secondaryCeilingV: [10_000, 80_000],
+};
 
 /** Defaults overlaid with the caller's values; a non-finite override is ignored (the default stands). */
 export function resolveConditions(engine: EngineSpec, inputs?: ConditionInputs): ResolvedConditions {

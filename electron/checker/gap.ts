@@ -61,7 +61,9 @@ export function suggestGap(grid: RpmGrid, availableV: Float64Array, lastIndex: n
   if (meets(hi)) return { suggestedGapM: hi, ...base };
   let a = lo;
   let b = hi;
-  for (let k = 0; k < 40; k++) {
+  // The answer is rounded down to 0.01 mm: once both ends round down to the same 0.01 mm the
+  // edge between them does too, so the halving stops there (what 40 halvings would print).
+  for (let k = 0; k < 40 && Math.floor(a * 1e5) !== Math.floor(b * 1e5); k++) {
     const mid = 0.5 * (a + b);
     if (meets(mid)) a = mid;
     else b = mid;

@@ -6,21 +6,24 @@
  * search returns.
  */
 import { FAIL_TESTS } from './rules/index.js';
-import type { Baseline } from './rules/context.js';
+import { OFF_TIME_FAIL_RATIO } from './rules/spark.js';
+import type { Baseline, RuleContext } from './rules/context.js';
 import type { PreparedSetup } from './prepare.js';
 import { gapOf, requiredFor, ruleContext, worstReserve, type Session } from './session.js';
 import { evaluateGrid, type SweepScope, type Workspace } from './sweep.js';
 import type { KeyOnReport } from './types.js';
 
 /** The sweep scopes of the verdict-only pass: no fouled-plug column (only the report reads it). */
-const VERDICT: SweepScope = { verdictOnly: true };
-const VERDICT_CRANKING: SweepScope = { verdictOnly: true, crankingOnly: true };
+const VERDICT: SweepScope = { verdictOnly: true, offTimeFailRatio: OFF_TIME_FAIL_RATIO };
+const VERDICT_CRANKING: SweepScope = { verdictOnly: true, crankingOnly: true, offTimeFailRatio: OFF_TIME_FAIL_RATIO };
 
 export interface Judgement {
   /** Lowest reserve ratio from cranking to redline. */
   worstRatio: number;
   /** Whether any rule fails. */
   fails: boolean;
+  /** What the fail tests were given (the search asks the tach test again with another tach). */
+  ctx: RuleContext;
 }
 
 /**
@@ -41,5 +44,5 @@ export function judge(s: Session, prep: PreparedSetup, keyOn: KeyOnReport, basel
     failed[k] = f ? 1 : 0;
     if (f) fails = true;
   }
-  return { worstRatio, fails };
+  return { worstRatio, fails, ctx };
 }

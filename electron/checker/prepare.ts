@@ -4,13 +4,14 @@
  * secondary constants, the CD stage. Done once per setup so the rpm loop is arithmetic only.
  */
 import { DEFAULT_COUPLING_K, kelvin } from './conditions.js';
+import { RunningBallast } from './ballast.js';
 import { meanSquareCurrentA2 } from './charge.js';
 import { REVERSED_POLARITY_FACTOR } from './breakdown.js';
-import { cdSecondaryPeakV, cdSparkDurationS, leakageInductanceH } from './cd.js';
+import { cdRiseTimeS, cdSecondaryPeakV, cdSparkDurationS, leakageInductanceH } from './cd.js';
 import { dwellFractionFromAngle } from './dwell.js';
 import { parallelRlcPeakVPerA } from './fouled.js';
 import { copperResistanceOhm, finalCurrentA } from './primary.js';
-import { effectiveSecondaryCapacitanceF, secondaryRiseTimeS, turnsRatio, voltsPerAmp } from './secondary.js';
+import { effectiveSecondaryCapacitanceF, secondaryDampingFactor, secondaryRiseTimeS, turnsRatio, voltsPerAmp } from './secondary.js';
 import { ironBallastResistanceOhm, selfHeatedTemperatureK } from './thermal.js';
 import { dwellTimeS, DwellMode, type DwellParams } from './timing.js';
 import type { BallastSpec, BreakdownModel, EngineSpec, ResolvedConditions, SetupSpec, SwitchingKind } from './types.js';
@@ -28,7 +29,9 @@ export interface PreparedCd {
   peakPerChargeV: number;
   /** The same while cranking (cold winding). */
   peakPerChargeCrankingV: number;
-  riseRateVPerS: number;
+  /** Secondary rise time: the transfer loop's peak time pi / omega_d (cd.ts), running and cranking. */
+  riseS: number;
+  riseCrankingS: number;
   sparkDurationS: number;
 }
 
@@ -41,11 +44,15 @@ export interface PreparedSetup extends DwellParams {
   switchDropV: number;
   runningSupplyV: number;
   crankingSupplyV: number;
+  /** A dynamo car below its cut-in speed: the battery at rest (the running supply otherwise). */
+  restingSupplyV: number;
   coilColdOhm: number;
   coilHotOhm: number;
   ballastColdOhm: number;
   ballastHotOhm: number;
   ballastHotK: number;
+  /** The ballast at the surroundings (cranking, a cold engine). */
+  ballastColdK: number;
   harnessOhm: number;
   contactOhm: number;
   rRunningOhm: number;
@@ -53,6 +60,8 @@ export interface PreparedSetup extends DwellParams {
   rColdOhm: number;
   iFinalRunningA: number;
   iFinalCrankingA: number;
+  /** Final current on the resting supply with the running (idle) resistances. */
+  iFinalRestingA: number;
   tauRunningS: number;
   tauCrankingS: number;
   primaryInductanceH: number;
@@ -64,8 +73,17 @@ export interface PreparedSetup extends DwellParams {
   secondaryResistanceOhm: number;
   eta: number;
   clampV: number | null;
-  /** n x clamp, or Infinity without a clamp. */
+  /** The lower of n x clamp (Infinity without a clamp) and the coil's secondary ceiling. */
   capV: number;
+  /** n x clamp, or Infinity without a clamp: the circuit's own limit, before the ceiling. */
+  clampCapV: number;
+  /** The coil's rated secondary (insulation) voltage: its own rating, else the labelled condition. */
+  ceilingV: number;
+  /** Inductive peak per primary ampere at break: sqrt(Lp / C_eff) x efficiency x secondary damping. */
+  peakVPerA: number;
+  /** e^(-alpha t*) of the secondary's series resistance (source-free series RLC, secondary.ts). */
+  dampingFactor: number;
+  couplingK: number;
   arcV: number;
   fouledShuntOhm: number;
   voltsPerAmp: number;
@@ -76,6 +94,9 @@ export interface PreparedSetup extends DwellParams {
   polarityFactor: number;
   moduleSupplyRunningV: number | null;
   moduleSupplyCrankingV: number | null;
+  moduleSupplyRestingV: number | null;
+  /** An iron-wire ballast heated by an inductive coil: solved at each running rpm by the sweep. */
+  ironBallast: RunningBallast | null;
   cd: PreparedCd | null;
   magnetoRatedA: number;
   magnetoFullRpm: number;
@@ -125,6 +146,10 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
   const switchDrop = m ? nonNeg(m.switchSaturationV, 0) : 0;
   const runV = nonNeg(c.runningSupplyV.value, 14);
   const crankV = crankingSupplyOf(c);
+  // A dynamo gives nothing below its cut-in speed: there the coil sees the battery at rest.
+  const dynamo = engine.charging === 'dynamo';
+  const restV = dynamo ? nonNeg(c.restingBatteryV.value, engine.systemVoltageV === 6 ? 6.2 : 12.4) : runV;
+  const idleV = dynamo && engine.idleRpm < c.dynamoCutInRpm.value ? restV : runV;
 
   // Dwell parameters.
   let mode: DwellMode = DwellMode.Cam;
@@ -157,35 +182,45 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     limitA,
   };
 
-  // Ballast: cold value, and hot equilibrium at idle on the running supply.
+  // Ballast: cold value, and the hot equilibrium at idle (the sweep solves each running rpm; see
+  // ballast.ts). Idle is on the supply the coil sees at idle (a dynamo car may not charge there).
   const b = setup.ballast;
   const bCold = b ? pos(b.coldResistanceOhm.value, 1.5, 'The ballast resistance', issues) : 0;
   const theta = b ? (b.thermalResistanceKPerW ?? c.ballastThermalResistanceKPerW.value) : 0;
   const baseHot = coilHot + harness + contact;
   const ambientK = kelvin(hotC);
   let bHotK = kelvin(ambientC);
+  let ironBallast: RunningBallast | null = null;
   if (b && kind !== 'magneto') {
-    const idleRate = sparkRateHz(engine.idleRpm, engine.cylinders, engine.cycle);
-    const period = idleRate > 0 ? 1 / idleRate : 1;
-    // (Passed straight to the solver rather than named: the search prepares thousands of setups.)
-    bHotK = selfHeatedTemperatureK(ambientK, Math.max(0, theta), (tK: number): number => {
-      const rb = ballastAt(b, bCold, tK);
-      if (kind === 'capacitive-discharge') {
-        // The ballast only carries the charger's input current, about P / V.
-        const i = (m?.cd?.chargerPowerW ?? 0) / Math.max(1, runV);
-        return i * i * rb;
+    if (kind === 'capacitive-discharge') {
+      // The ballast only carries the charger's input current, about P / V, the same at every rpm.
+      const i = (m?.cd?.chargerPowerW ?? 0) / Math.max(1, runV);
+      bHotK = selfHeatedTemperatureK(ambientK, Math.max(0, theta), (tK: number): number => i * i * ballastAt(b, bCold, tK));
+    } else {
+      const idleRate = sparkRateHz(engine.idleRpm, engine.cylinders, engine.cycle);
+      const period = idleRate > 0 ? 1 / idleRate : 1;
+      if (b.ballastType === 'iron-wire') {
+        ironBallast = new RunningBallast(bCold, Math.max(0, theta), ambientK, baseHot, switchDrop, lp, dwellParams);
+        ironBallast.supplyV = idleV;
+        ironBallast.periodS = period;
+        ironBallast.rpm = engine.idleRpm;
+        // Secant steps from 100 K above the surroundings; bisection decides if they do not settle
+        // on a stable equilibrium (ballast.ts).
+        bHotK = ironBallast.settle(ambientK + 100, -1);
+      } else {
+        // Ceramic or harness wire holds its resistance, so its temperature follows directly.
+        const r = baseHot + bCold;
+        const iF = finalCurrentA(idleV, switchDrop, r);
+        const tau = lp / r;
+        bHotK = ambientK + Math.max(0, theta) * meanSquareCurrentA2(iF, tau, dwellTimeS(dwellParams, period, engine.idleRpm, iF, tau), period, limitA) * bCold;
       }
-      const r = baseHot + rb;
-      const iF = finalCurrentA(runV, switchDrop, r);
-      const tau = lp / r;
-      const td = dwellTimeS(dwellParams, period, engine.idleRpm, iF, tau);
-      return meanSquareCurrentA2(iF, tau, td, period, limitA) * rb;
-    });
+    }
   }
   const bHot = b ? ballastAt(b, bCold, bHotK) : 0;
   const rRunning = baseHot + bHot;
   const rCold = coilCold + harness + contact + bCold;
   const iRun = finalCurrentA(runV, switchDrop, rRunning);
+  const iRest = finalCurrentA(restV, switchDrop, rRunning);
   const crank = crankingPath(setup, m, kind, crankV, coilCold, harness, contact, bCold, switchDrop, lp);
 
   // Secondary.
@@ -194,28 +229,39 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
   const cEff = effectiveSecondaryCapacitanceF(cs, condenser, n);
   const eta = Math.min(1, pos(c.transferEfficiency.value, 0.8, 'The transfer efficiency', issues));
   const clampV = m && m.primaryClampV !== null && m.primaryClampV > 0 ? m.primaryClampV : null;
-  const capV = clampV !== null ? n * clampV : Infinity;
+  const clampCapV = clampV !== null ? n * clampV : Infinity;
+  // The coil's insulation rating caps whatever the circuit could reach (its own rating, else the labelled default).
+  const ceilingV = typeof coil.ratedSecondaryV === 'number' && coil.ratedSecondaryV > 0 ? coil.ratedSecondaryV : pos(c.secondaryCeilingV.value, 35_000, 'The secondary ceiling', issues);
+  const capV = Math.min(clampCapV, ceilingV);
   const leadOhm = setup.leads ? nonNeg(setup.leads.resistancePerLeadOhm, 0) : 0;
   const plugOhm = setup.plug && setup.plug.resistor ? nonNeg(setup.plug.resistorOhm, 0) : 0;
   const rs = nonNeg(coil.secondaryResistanceOhm, 8000) + leadOhm + plugOhm;
+  const damping = secondaryDampingFactor(rs, ls, cEff);
+  const kc = c.couplingK.value;
+  const couplingK = Number.isFinite(kc) && kc > 0 && kc < 1 ? kc : DEFAULT_COUPLING_K.value;
   const fouledOhm = pos(c.fouledShuntOhm.value, 500_000, 'The fouled-plug shunt', issues);
 
   // Module supply: fed from terminal 15 it loses only the harness drop; fed after the ballast it
   // also loses the ballast drop whenever the coil draws current (the worst moment, just before break).
   // The cranking case is part of the cranking path above.
   let modRun: number | null = null;
+  let modRest: number | null = null;
   let cd: PreparedCd | null = null;
   if (m) {
     const afterBallast = setup.moduleFeed === 'after-ballast' && b !== null;
     const feedRun = harness + (afterBallast ? bHot : 0);
-    modRun = kind === 'capacitive-discharge' && m.cd ? supplyUnderPowerLoadV(runV, feedRun, m.cd.chargerPowerW) : Math.max(0, runV - feedRun * iRun);
+    const isCdCharger = kind === 'capacitive-discharge' && m.cd !== null;
+    modRun = isCdCharger ? supplyUnderPowerLoadV(runV, feedRun, m.cd!.chargerPowerW) : Math.max(0, runV - feedRun * iRun);
+    modRest = isCdCharger ? supplyUnderPowerLoadV(restV, feedRun, m.cd!.chargerPowerW) : Math.max(0, restV - feedRun * iRest);
     if (kind === 'capacitive-discharge') {
       const stage = m.cd;
       const capF = stage ? pos(stage.capacitorF, 1e-6, 'The CD capacitor', issues) : 0;
       // The fast transfer rings through the leakage inductance and the loop resistance: the
       // primary winding plus the secondary series resistance reflected through n^2 (cd.ts).
-      const leakageH = leakageInductanceH(lp, DEFAULT_COUPLING_K.value);
+      const leakageH = leakageInductanceH(lp, couplingK);
       const secondaryReflectedOhm = rs / (n * n);
+      const hotLoop = { loopOhm: coilHot + secondaryReflectedOhm, leakageH };
+      const coldLoop = { loopOhm: coilCold + secondaryReflectedOhm, leakageH };
       cd = {
         capacitorF: capF,
         nominalV: stage ? nonNeg(stage.chargeVoltageV, 0) : 0,
@@ -223,9 +269,10 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
         supplyMinV: nonNeg(m.supplyMinV, 0),
         cutOutV: m.cutOutV ?? 0.75 * nonNeg(m.supplyMinV, 0),
         multiSparkBelowRpm: stage?.multiSparkBelowRpm ?? null,
-        peakPerChargeV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta, { loopOhm: coilHot + secondaryReflectedOhm, leakageH }) : 0,
-        peakPerChargeCrankingV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta, { loopOhm: coilCold + secondaryReflectedOhm, leakageH }) : 0,
-        riseRateVPerS: pos(c.cdRiseRateVPerS.value, 5e9, 'The CD rise rate', issues),
+        peakPerChargeV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta, hotLoop) : 0,
+        peakPerChargeCrankingV: capF > 0 ? cdSecondaryPeakV(capF, 1, n, cs, eta, coldLoop) : 0,
+        riseS: capF > 0 ? cdRiseTimeS(capF, n, cs, hotLoop) : 0,
+        riseCrankingS: capF > 0 ? cdRiseTimeS(capF, n, cs, coldLoop) : 0,
         sparkDurationS: cdSparkDurationS(lp, capF),
       };
     }
@@ -246,11 +293,13 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     switchDropV: switchDrop,
     runningSupplyV: kind === 'magneto' ? 0 : runV,
     crankingSupplyV: kind === 'magneto' ? 0 : crankV,
+    restingSupplyV: kind === 'magneto' ? 0 : restV,
     coilColdOhm: coilCold,
     coilHotOhm: coilHot,
     ballastColdOhm: bCold,
     ballastHotOhm: bHot,
     ballastHotK: bHotK,
+    ballastColdK: kelvin(ambientC),
     harnessOhm: harness,
     contactOhm: contact,
     rRunningOhm: rRunning,
@@ -258,6 +307,7 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     rColdOhm: rCold,
     iFinalRunningA: kind === 'magneto' ? 0 : iRun,
     iFinalCrankingA: crank.iFinalCrankingA,
+    iFinalRestingA: kind === 'magneto' ? 0 : iRest,
     tauRunningS: lp / Math.max(1e-6, rRunning),
     tauCrankingS: crank.tauCrankingS,
     primaryInductanceH: lp,
@@ -270,6 +320,11 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     eta,
     clampV,
     capV,
+    clampCapV,
+    ceilingV,
+    peakVPerA: voltsPerAmp(lp, cEff) * eta * damping,
+    dampingFactor: damping,
+    couplingK,
     arcV: pos(c.arcVoltageV.value, 700, 'The arc voltage', issues),
     fouledShuntOhm: fouledOhm,
     voltsPerAmp: voltsPerAmp(lp, cEff),
@@ -280,6 +335,8 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     polarityFactor: setup.coilWiring === 'reversed' ? REVERSED_POLARITY_FACTOR : 1,
     moduleSupplyRunningV: modRun,
     moduleSupplyCrankingV: crank.moduleSupplyCrankingV,
+    moduleSupplyRestingV: modRest,
+    ironBallast,
     cd,
     magnetoRatedA: setup.magneto ? nonNeg(setup.magneto.ratedCurrentA, 0) : 0,
     magnetoFullRpm: setup.magneto ? nonNeg(setup.magneto.fullOutputRpm, 1) : 1,

@@ -2,15 +2,19 @@
  * Turn an analysis (columns of numbers) into the plain report the UI, the CLI and the SPICE deck
  * writer read. Every number is forced finite here as a last guard.
  */
-import { conditionUnits, DEFAULT_COUPLING_K } from './conditions.js';
+import { whatToDo } from './advice.js';
+import { noSparkWords, type NoSparkWords } from './no-spark.js';
+import { conditionUnits } from './conditions.js';
 import type { Analysis, Session } from './session.js';
 import type { RpmGrid } from './grid.js';
 import type { Workspace } from './sweep.js';
+import type { PreparedSetup } from './prepare.js';
+import { setupFigures, sparkEnergyAt } from './report-figures.js';
 import type { CircuitAtRpm, ConditionName, Figure, OperatingPoint, ResolvedCircuit, SetupReport } from './types.js';
 
 const fin = (x: number): number => (Number.isFinite(x) ? x : 0);
 
-function point(grid: RpmGrid, ws: Workspace, i: number, isCd: boolean): OperatingPoint {
+function point(grid: RpmGrid, ws: Workspace, i: number, isCd: boolean, dead: NoSparkWords, p: PreparedSetup): OperatingPoint {
   const avail = fin(ws.availableV[i]!);
   const req = fin(ws.requiredV[i]!);
   return {
@@ -36,7 +40,12 @@ function point(grid: RpmGrid, ws: Workspace, i: number, isCd: boolean): Operatin
     fouledPeakV: fin(ws.fouledV[i]!),
     cdChargeVoltageV: isCd ? fin(ws.cdChargeV[i]!) : null,
     multiSpark: ws.multiSpark[i] === 1,
+    noSparkReason: ws.noSpark[i] === 1 ? ((grid.cranking[i] === 1 ? dead.cranking : grid.resting[i] === 1 ? dead.resting : dead.running) ?? 'No spark: the module does not switch.') : null,
     moduleDissipationW: fin(ws.moduleW[i]!),
+    availableBeforeCeilingV: fin(ws.uncappedV[i]!),
+    cappedAtCeiling: ws.uncappedV[i]! > p.ceilingV,
+    sparkEnergyJ: fin(sparkEnergyAt(p, ws, i)),
+    ballastTemperatureK: p.spec.ballast ? fin(ws.ballastK[i]!) : null,
   };
 }
 
@@ -71,6 +80,10 @@ function circuitOf(a: Analysis): ResolvedCircuit {
     moduleSupplyCrankingV: p.moduleSupplyCrankingV,
     moduleSupplyRunningV: p.moduleSupplyRunningV,
     cd: p.cd ? { capacitorF: p.cd.capacitorF, nominalChargeVoltageV: p.cd.nominalV, chargerPowerW: p.cd.chargerPowerW } : null,
+    restingSupplyV: fin(p.restingSupplyV),
+    secondaryCeilingV: fin(p.ceilingV),
+    secondaryDampingFactor: fin(p.dampingFactor),
+    couplingK: fin(p.couplingK),
   };
 }
 
@@ -83,7 +96,13 @@ function inputsOf(s: Session, a: Analysis): Figure[] {
   const coil = a.setup.coil;
   out.push({ name: 'coil primary resistance at 20 degC', value: coil.primaryResistanceOhm20C.value, unit: 'ohm', provenance: coil.primaryResistanceOhm20C.provenance });
   // Only the capacitive-discharge peak uses the coupling (its transfer rings through the leakage).
-  if (a.prep.cd) out.push({ name: 'coil coupling coefficient', value: DEFAULT_COUPLING_K.value, unit: '', provenance: DEFAULT_COUPLING_K.provenance });
+  if (a.prep.cd) out.push({ name: 'coil coupling coefficient', value: a.prep.couplingK, unit: '', provenance: s.conditions.couplingK.provenance });
+  const rated = coil.ratedSecondaryV;
+  out.push(
+    typeof rated === 'number' && rated > 0
+      ? { name: 'coil secondary ceiling', value: rated, unit: 'V', provenance: 'catalogue' }
+      : { name: 'coil secondary ceiling', value: s.conditions.secondaryCeilingV.value, unit: 'V', provenance: s.conditions.secondaryCeilingV.provenance },
+  );
   const b = a.setup.ballast;
   if (b) {
     out.push({ name: 'ballast resistance at 20 degC', value: b.coldResistanceOhm.value, unit: 'ohm', provenance: b.coldResistanceOhm.provenance });
@@ -102,14 +121,15 @@ export function toReport(s: Session, a: Analysis): SetupReport {
   const grid = s.grids.sweep;
   const points: OperatingPoint[] = new Array(grid.n);
   const isCd = a.prep.cd !== null;
-  for (let i = 0; i < grid.n; i++) points[i] = point(grid, a.ws, i, isCd);
+  const dead = noSparkWords(a.prep);
+  for (let i = 0; i < grid.n; i++) points[i] = point(grid, a.ws, i, isCd, dead, a.prep);
   const kg = s.grids.key;
   return {
     label: a.setup.label,
     switching: a.setup.switching,
     circuit: circuitOf(a),
     points,
-    keyPoints: { cranking: point(kg, a.keyWs, 0, isCd), idle: point(kg, a.keyWs, 1, isCd), mid: point(kg, a.keyWs, 2, isCd), redline: point(kg, a.keyWs, 3, isCd) },
+    keyPoints: { cranking: point(kg, a.keyWs, 0, isCd, dead, a.prep), idle: point(kg, a.keyWs, 1, isCd, dead, a.prep), mid: point(kg, a.keyWs, 2, isCd, dead, a.prep), redline: point(kg, a.keyWs, 3, isCd, dead, a.prep) },
     keyOn: {
       currentFlows: a.keyOn.currentFlows,
       currentA: fin(a.keyOn.currentA),
@@ -119,11 +139,13 @@ export function toReport(s: Session, a: Analysis): SetupReport {
     },
     rules: a.rules,
     verdict: a.verdict,
+    actions: whatToDo(a.rules),
     worstReserveRatio: fin(a.worstRatio),
     worstReserveRpm: fin(grid.rpm[a.worstIndex]!),
     belowMarginFromRpm: a.belowMarginIndex >= 0 ? fin(grid.rpm[a.belowMarginIndex]!) : null,
     gap: a.gap,
     breakdownModel: s.model,
+    figures: setupFigures(s.engine, s.grids, a.prep, a.ws, a.keyWs),
     inputs: inputsOf(s, a),
   };
 }

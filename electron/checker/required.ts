@@ -4,7 +4,7 @@
  * compression, then the breakdown law on the density-reduced gap.
  */
 import { airBreakdownV, paschenBreakdownFromReducedV, reducedGapCm } from './breakdown.js';
-import { compressInto, type CompressedState } from './compression.js';
+import { compressInto, POLYTROPIC_INDEX, type CompressedState } from './compression.js';
 import { volumeRatioAtAngle } from './geometry.js';
 import type { AdvanceRow, BreakdownModel } from './types.js';
 
@@ -27,10 +27,10 @@ export function sparkAngleDegBtdc(staticDeg: number, curve: readonly AdvanceRow[
  * Cylinder state at a spark angle. The charge is taken as closed at BDC (V1 = r_c V_c), and the
  * angle is clamped to 0..170 degrees from TDC (the model does not apply past BDC).
  */
-export function cylinderStateInto(out: CompressedState, compressionRatio: number, rodToCrankRatio: number, angleDegBtdc: number, p1Pa: number, t1K: number): CompressedState {
+export function cylinderStateInto(out: CompressedState, compressionRatio: number, rodToCrankRatio: number, angleDegBtdc: number, p1Pa: number, t1K: number, polytropicIndex = POLYTROPIC_INDEX): CompressedState {
   const theta = Math.min(170, Math.abs(angleDegBtdc));
   const vOverVc = volumeRatioAtAngle(compressionRatio, rodToCrankRatio, theta);
-  return compressInto(out, p1Pa, t1K, compressionRatio / vOverVc);
+  return compressInto(out, p1Pa, t1K, compressionRatio / vOverVc, polytropicIndex);
 }
 
 /** Breakdown voltage of a gap in a given cylinder state, by the chosen law. */

@@ -64,6 +64,11 @@ export interface EngineSpec {
   pointsFloatRpm: number | null;
   staticTimingDegBtdc: number;
   advanceCurve: AdvanceRow[];
+  /**
+   * How the battery is kept charged. A dynamo gives nothing below its cut-in speed, so there the
+   * coil sees the battery at rest; an alternator charges from idle. Absent: 'alternator'.
+   */
+  charging?: 'dynamo' | 'alternator';
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -86,8 +91,12 @@ export type ConditionName =
   | 'ballastThermalResistanceKPerW'
   | 'coilDissipationLimitW'
   | 'currentLimitHoldS'
-  | 'cdRiseRateVPerS'
-  | 'marginRatio';
+  | 'marginRatio'
+  | 'polytropicIndex'
+  | 'couplingK'
+  | 'dynamoCutInRpm'
+  | 'restingBatteryV'
+  | 'secondaryCeilingV';
 
 /** What the caller supplies: any subset, each with its own provenance. */
 export type ConditionInputs = Partial<Record<ConditionName, Sourced>>;
@@ -111,6 +120,11 @@ export interface CoilSpec {
   forBallast: boolean;
   ratedVoltageV: 6 | 12;
   maxDissipationW: number | null;
+  /**
+   * Rated (insulation) secondary voltage: the most the coil is built to give. Absent or null: the
+   * `secondaryCeilingV` condition (a labelled default).
+   */
+  ratedSecondaryV?: number | null;
 }
 
 export type BallastType = 'iron-wire' | 'ceramic' | 'harness-wire';
@@ -241,6 +255,8 @@ export type RuleId =
   | 'peak-current'
   | 'ballast-plan'
   | 'cranking-supply'
+  | 'module-supply-max'
+  | 'total-advance'
   | 'earth-polarity'
   | 'coil-polarity'
   | 'tach'
@@ -256,6 +272,26 @@ export type RuleId =
   | 'module-heat'
   | 'setup-complete';
 
+/**
+ * What a rule's action asks for, so the report can merge every rule's advice into one list
+ * without contradictions (advice.ts lists the pairs that cannot both be done).
+ */
+export type Intent =
+  | 'ballast:add'
+  | 'ballast:remove'
+  | 'ballast:keep'
+  | 'bypass:add'
+  | 'bypass:remove'
+  | 'coil-resistance:raise'
+  | 'coil-resistance:lower'
+  | 'dwell:longer'
+  | 'dwell:shorter'
+  | 'gap:close'
+  | 'gap:widen'
+  | 'condenser:fit'
+  | 'condenser:remove'
+  | 'feed:improve';
+
 export interface RuleResult {
   id: RuleId;
   title: string;
@@ -265,6 +301,8 @@ export interface RuleResult {
   why: string;
   /** What to do. */
   action: string;
+  /** What the action asks for (absent: nothing another action could contradict). */
+  intents?: Intent[];
 }
 
 /** Which supply case a sweep point was computed for. */
@@ -310,6 +348,14 @@ export interface ResolvedCircuit {
   moduleSupplyCrankingV: number | null;
   moduleSupplyRunningV: number | null;
   cd: { capacitorF: number; nominalChargeVoltageV: number; chargerPowerW: number } | null;
+  /** The battery at rest, what a dynamo car's coil sees below the cut-in speed (the running supply otherwise). */
+  restingSupplyV: number;
+  /** The coil's rated secondary (insulation) voltage; available voltage never exceeds it. */
+  secondaryCeilingV: number;
+  /** e^(-alpha t*): what the secondary series resistance takes off the inductive peak (source-free series RLC). */
+  secondaryDampingFactor: number;
+  /** Coupling of the coil windings used for the CD transfer loop (a working condition). */
+  couplingK: number;
 }
 
 /** One point of the rpm sweep. */
@@ -339,6 +385,22 @@ export interface OperatingPoint {
   cdChargeVoltageV: number | null;
   multiSpark: boolean;
   moduleDissipationW: number;
+  /**
+   * Why this point has no spark (the module's own supply is below what it needs to switch), or null
+   * when it sparks. A point without a spark has zero current, energy and available voltage, reserve 0.
+   */
+  noSparkReason: string | null;
+  /** Available voltage before the coil's secondary ceiling; above `availableV` exactly when capped. */
+  availableBeforeCeilingV: number;
+  /** True where the coil's rated secondary voltage caps the available voltage. */
+  cappedAtCeiling: boolean;
+  /**
+   * Energy delivered to the spark itself over its duration (the arc at the arc voltage), which is
+   * what compares kinds fairly: a CD spark is short and hands over little of its stored energy.
+   */
+  sparkEnergyJ: number;
+  /** Ballast temperature at this point (its own steady state at this rpm); null without a ballast. */
+  ballastTemperatureK: number | null;
 }
 
 /** Everything a SPICE deck needs for one rpm: the resolved circuit plus the per-rpm values. */
@@ -398,6 +460,11 @@ export interface SetupReport {
   rules: RuleResult[];
   /** Worst verdict among the rules. */
   verdict: Verdict;
+  /**
+   * What to do, merged from every rule that is not a pass: fails first, then cautions, in report
+   * order, each once and without contradictions (advice.ts).
+   */
+  actions: string[];
   /** Lowest reserve ratio from cranking to redline, and where. */
   worstReserveRatio: number;
   worstReserveRpm: number;
@@ -406,6 +473,12 @@ export interface SetupReport {
   gap: PlugGapSuggestion | null;
   /** Which breakdown law the required voltage used. */
   breakdownModel: BreakdownModel;
+  /**
+   * Figures a restorer would otherwise work out by hand: time to the current limit, CD recharge
+   * time and the rpm where CD energy starts to fall, how much the coupling moves a CD peak, the
+   * cylinder pressure and temperature at the spark at each key speed, the secondary ceiling.
+   */
+  figures: Figure[];
   /** Inputs that were defaulted or overridden, with provenance. */
   inputs: Figure[];
 }
@@ -448,6 +521,12 @@ export interface SearchInput {
   leads: LeadsSpec | null;
   plug: PlugSpec | null;
   plugGapM: number;
+  /**
+   * Other tachometers, HT leads and plugs on the shelf. Where the fitted ones make a combination
+   * fail and some of these would cure it, the search fits them (search.ts says which it picks).
+   * Absent or empty: the search only changes module, coil and ballast.
+   */
+  shelf?: { tachs: TachSpec[]; leads: LeadsSpec[]; plugs: PlugSpec[] };
   conditions?: ConditionInputs;
   options?: CheckOptions;
   /** How many full reports to return; default 5. */
@@ -460,6 +539,10 @@ export interface SearchCandidate {
   /** -1 for no ballast. */
   ballastIndex: number;
   crankingBypass: boolean;
+  /** Index into `shelf.tachs`, `shelf.leads`, `shelf.plugs` of a part fitted instead of today's; -1 keeps today's. */
+  tachIndex: number;
+  leadsIndex: number;
+  plugIndex: number;
   report: SetupReport;
 }
 

@@ -1,4 +1,7 @@
-/** Argument parsing: `<command> <file> [--flag value | --flag=value | --switch]`. */
+/**
+ * Argument parsing: `<command> <file> [--flag value | --flag=value | --switch]`, in any order.
+ * A switch (SWITCHES) never takes the word after it, so `check --sweep plan.json` reads the file.
+ */
 import { CliError } from './errors.js';
 
 export interface ParsedArgs {
@@ -6,6 +9,9 @@ export interface ParsedArgs {
   positionals: string[];
   flags: Map<string, string | true>;
 }
+
+/** Options that are on or off and take no value. Every other option takes one. */
+export const SWITCHES: ReadonlySet<string> = new Set(['sweep']);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positionals: string[] = [];
@@ -20,7 +26,7 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
       if (eq > 2) flags.set(a.slice(2, eq), a.slice(eq + 1));
       else {
         const next = argv[i + 1];
-        if (next !== undefined && !next.startsWith('--')) {
+        if (!SWITCHES.has(a.slice(2)) && next !== undefined && !next.startsWith('--')) {
           flags.set(a.slice(2), next);
           i++;
         } else flags.set(a.slice(2), true);
@@ -38,6 +44,14 @@ export function onlyFlags(args: ParsedArgs, allowed: readonly string[]): void {
       throw new CliError(`--${name}: not an option of "${args.command}". Run with --help to see the options.`);
     }
   }
+}
+
+/** A switch: false when absent, true when given; `--sweep=yes` is refused (a switch takes no value). */
+export function switchFlag(args: ParsedArgs, name: string): boolean {
+  const v = args.flags.get(name);
+  if (v === undefined) return false;
+  if (v !== true) throw new CliError(`--${name}: a switch, it takes no value; write --${name} alone, not --${name}=${v}.`);
+  return true;
 }
 
 /** A whole-number flag within [min, max], or the default when absent. */

@@ -6,7 +6,8 @@ import { readFileSync } from 'node:fs';
 import { checkSetup, compareSetups, searchBest, CheckerInputError, type SetupReport } from '../checker/index.js';
 import { comparisonInput, conditionInputs, engineSpec, existingSetupSpec, planSetupSpec, searchInput, SetupAdapterError } from '../setup/index.js';
 import { buildDeck, circuitFromReport, DeckError, ExportError, type Scenario } from '../spice/index.js';
-import { choiceFlag, intFlag, numberFlag, onePositional, onlyFlags, type ParsedArgs } from './args.js';
+import { MAX_RPM_POINTS, MIN_RPM_POINTS } from '../checker/grid.js';
+import { choiceFlag, intFlag, numberFlag, onePositional, onlyFlags, switchFlag, type ParsedArgs } from './args.js';
 import { ignitionCautions } from '../safety/cautions.js';
 import { SheetInputError } from '../checklist/errors.js';
 import { CliError } from './errors.js';
@@ -62,11 +63,11 @@ function trimReport(r: SetupReport, withSweep: boolean): Partial<SetupReport> {
 export function checkCommand(args: ParsedArgs): string {
   onlyFlags(args, ['sweep', 'rpm-points']);
   const file = onePositional(args, 'plan file');
+  const sweep = switchFlag(args, 'sweep');
+  const rpmPoints = intFlag(args, 'rpm-points', MIN_RPM_POINTS, MAX_RPM_POINTS, null);
   const w = readPlanFile(readJsonFile(file));
-  const rpmPoints = intFlag(args, 'rpm-points', 2, 2000, null);
   return guarded(() => {
     const report = compareSetups(comparisonInput(w.engine, w.plans, w.parts, undefined, checkOptions(w, rpmPoints)));
-    const sweep = args.flags.get('sweep') === true;
     return toJson({
       engine: w.engine.name,
       conditions: report.conditions,
@@ -83,7 +84,7 @@ export function searchCommand(args: ParsedArgs): string {
   const file = onePositional(args, 'parts-bin file');
   const w = readBinFile(readJsonFile(file));
   const top = intFlag(args, 'top', 1, 50, w.topN ?? 5)!;
-  const rpmPoints = intFlag(args, 'rpm-points', 2, 2000, null);
+  const rpmPoints = intFlag(args, 'rpm-points', MIN_RPM_POINTS, MAX_RPM_POINTS, null);
   return guarded(() => {
     const input = searchInput(w.engine, w.parts, top, checkOptions(w, rpmPoints));
     const result = searchBest(input);

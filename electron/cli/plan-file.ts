@@ -6,7 +6,9 @@
  */
 import { z } from 'zod';
 import { engineInput, existingSetup, partInput, planFields, type Engine, type Part, type PartKind, type Plan } from '../../db/schema.js';
+import { MAX_RPM_POINTS, MIN_RPM_POINTS } from '../checker/grid.js';
 import { CliInputError } from './errors.js';
+import { unknownSettings } from './unknown-keys.js';
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 
@@ -16,7 +18,12 @@ type InlinePart = z.infer<typeof partInput>;
 
 const options = z
   .object({
-    rpmPoints: z.number().int('rpmPoints must be a whole number.').min(2, 'At least 2 rpm points.').max(2000, 'At most 2000 rpm points.').optional(),
+    rpmPoints: z
+      .number()
+      .int('rpmPoints must be a whole number.')
+      .min(MIN_RPM_POINTS, `At least ${MIN_RPM_POINTS} rpm points.`)
+      .max(MAX_RPM_POINTS, `At most ${MAX_RPM_POINTS} rpm points.`)
+      .optional(),
     breakdownModel: z.enum(['empirical-air', 'paschen']).optional(),
   })
   .strict();
@@ -36,6 +43,8 @@ const existingFile = z
     plugGapMm: existingSetup.shape.plugGapMm,
     magnetoRatedCurrentA: existingSetup.shape.magnetoRatedCurrentA,
     magnetoFullOutputRpm: existingSetup.shape.magnetoFullOutputRpm,
+    /** Which coil terminal goes to the supply side; default as marked for the car's earth. */
+    coilWiring: existingSetup.shape.coilWiring,
   })
   .strict();
 
@@ -49,6 +58,7 @@ const candidateFile = z
     ballast: inlinePart.nullable().default(null),
     crankingBypass: z.boolean({ error: 'crankingBypass must be true or false.' }).default(false),
     moduleFeed: planFields.shape.moduleFeed.default('switched-15'),
+    coilWiring: planFields.shape.coilWiring,
     tach: inlinePart.nullable().default(null),
     leads: inlinePart.nullable().default(null),
     plug: inlinePart.nullable().default(null),
@@ -84,10 +94,12 @@ export interface Workshop {
 }
 
 /** Turn zod issues into `path: why` lines; a missing field says so. */
-function issueLines(error: z.ZodError, raw: unknown, prefix: (path: (string | number)[]) => string): string[] {
+function issueLines(error: z.ZodError, raw: unknown, prefix: (path: (string | number)[]) => string, keepUnknown = false): string[] {
   const seen = new Set<string>();
   const lines: string[] = [];
   for (const issue of error.issues) {
+    // Unknown keys are reported by unknownSettings, with a suggestion; zod's own line would repeat them.
+    if (issue.code === 'unrecognized_keys' && !keepUnknown) continue;
     const path = issue.path.map((p) => (typeof p === 'symbol' ? String(p) : p));
     const key = prefix(path);
     if (seen.has(key)) continue;
@@ -138,7 +150,7 @@ function buildEngine(rawEngine: Record<string, unknown>, existing: Engine['exist
       ...issueLines(parsed.error, candidate, (path) => {
         if (path[0] === 'existing') return path[1] === 'ballastPartId' ? 'existing.ballastPart' : dotted(path);
         return `engine.${dotted(path)}`;
-      }),
+      }, true),
     );
     return null;
   }
@@ -164,19 +176,31 @@ function buildExisting(x: z.infer<typeof existingFile>, list: PartList, problems
     plugGapMm: x.plugGapMm,
     magnetoRatedCurrentA: x.magnetoRatedCurrentA ?? null,
     magnetoFullOutputRpm: x.magnetoFullOutputRpm ?? null,
+    coilWiring: x.coilWiring ?? 'as-marked-for-earth',
   };
 }
 
-function parseWith<T extends z.ZodType>(schema: T, raw: unknown): z.infer<T> {
-  const parsed = schema.safeParse(raw);
-  if (!parsed.success) throw new CliInputError(issueLines(parsed.error, raw, dotted));
-  return parsed.data;
+/** The engine as a file gives it: the stored engine's fields, without `existing` (that sits beside it). */
+const { existing: _existingInEngine, ...engineFileShape } = engineInput.shape;
+const engineFile = z.object(engineFileShape);
+const hints = { 'engine.existing': 'the existing setup goes at the top of the file, beside "engine"' };
+
+/**
+ * Parse the file. Unknown settings anywhere in it come back as problems, and the rest of the file
+ * is read without them, so the caller reports every problem at once; a file whose known settings
+ * do not parse is refused here with both.
+ */
+function parseWith<T extends z.ZodType>(schema: T, raw: unknown): { data: z.infer<T>; unknown: string[] } {
+  const { lines: unknown, known } = unknownSettings(raw, schema, { engine: engineFile }, hints);
+  const parsed = schema.safeParse(known);
+  if (!parsed.success) throw new CliInputError([...unknown, ...issueLines(parsed.error, known, dotted, true)]);
+  return { data: parsed.data, unknown };
 }
 
 /** A plan file: the engine, its existing setup and up to three candidates. */
 export function readPlanFile(raw: unknown): Workshop {
-  const f = parseWith(planFile, raw);
-  const problems: string[] = [];
+  const { data: f, unknown } = parseWith(planFile, raw);
+  const problems: string[] = [...unknown];
   const list = new PartList();
   const existing = buildExisting(f.existing, list, problems);
   const plans: Plan[] = f.candidates.map((c, i) => {
@@ -196,6 +220,7 @@ export function readPlanFile(raw: unknown): Workshop {
       ballastId: ref(c.ballast, 'ballast', 'ballast'),
       crankingBypass: c.crankingBypass,
       moduleFeed: c.moduleFeed,
+      coilWiring: c.coilWiring ?? 'as-marked-for-earth',
       tachId: ref(c.tach, 'tach', 'tach'),
       leadsId: ref(c.leads, 'leads', 'leads'),
       plugId: ref(c.plug, 'plug', 'plug'),
@@ -210,8 +235,8 @@ export function readPlanFile(raw: unknown): Workshop {
 
 /** A bin file: the engine, its existing setup, and the parts to search. */
 export function readBinFile(raw: unknown): Workshop {
-  const f = parseWith(binFile, raw);
-  const problems: string[] = [];
+  const { data: f, unknown } = parseWith(binFile, raw);
+  const problems: string[] = [...unknown];
   const list = new PartList();
   const existing = buildExisting(f.existing, list, problems);
   for (const p of f.parts) list.add(p);

@@ -5,7 +5,7 @@
  * the desktop app runs. Nothing outside this file decides what the renderer may ask for.
  */
 import { z } from 'zod';
-import { engine, engineInput, part, partInput, partKind, plan, planInput, planStatus, reading, readingInput, stepKey } from '../../db/schema.js';
+import { engine, engineInput, part, partInput, partKind, plan, planInput, planUpdateInput, planStatus, reading, readingInput, stepKey } from '../../db/schema.js';
 import { checkPlansRequest, checkSearchRequest, comparisonAnswer, searchAnswer } from './check-shapes.js';
 import { printAnswer, printRequest, sheetAnswerFields } from './sheet-shapes.js';
 
@@ -56,7 +56,8 @@ export const channels = {
   'plans.list': { request: z.object({ engineId: id.optional() }), response: z.array(plan) },
   'plans.get': { request: byId, response: plan },
   'plans.create': { request: z.object({ plan: planInput }), response: plan },
-  'plans.update': { request: z.object({ id, plan: planInput }), response: plan },
+  /** The status may be left out: then the stored one stays (it moves by 'plans.setStatus' and the work). */
+  'plans.update': { request: z.object({ id, plan: planUpdateInput }), response: plan },
   'plans.delete': { request: byId, response: z.object({ deleted: z.literal(true), readingsDeleted: z.number().int() }) },
   'readings.list': { request: z.object({ planId: id }), response: z.array(reading) },
   'readings.add': { request: z.object({ reading: readingInput }), response: reading },

@@ -72,6 +72,9 @@ export function searchShelf(repos: Repositories, req: { engineId: number; top?: 
   const coils = parts.filter((p) => p.kind === 'coil');
   const modules = parts.filter((p) => p.kind === 'module');
   const ballasts = parts.filter((p) => p.kind === 'ballast');
+  const tachs = parts.filter((p) => p.kind === 'tach');
+  const leadsParts = parts.filter((p) => p.kind === 'leads');
+  const plugs = parts.filter((p) => p.kind === 'plug');
   return adapting(() => {
     const input = searchInput(engine, parts, req.top ?? 5);
     const result = searchBest(input);
@@ -97,6 +100,10 @@ export function searchShelf(repos: Repositories, req: { engineId: number; top?: 
           ballastId: ballast?.id ?? null,
           ballastName: ballast?.name ?? null,
           crankingBypass: t.crankingBypass,
+          // Parts from the shelf fitted instead of today's, where today's would fail (null: keep today's).
+          tachId: t.tachIndex >= 0 ? tachs[t.tachIndex]!.id : null,
+          leadsId: t.leadsIndex >= 0 ? leadsParts[t.leadsIndex]!.id : null,
+          plugId: t.plugIndex >= 0 ? plugs[t.plugIndex]!.id : null,
           planName: planNameOf(t.report.label),
           setup: shownSetup(t.report, { kind: 'suggestion', planId: null, plugGapM: input.plugGapM }),
         };

@@ -39,6 +39,13 @@ export const shownPoint = z.object({
   availableKv: finite,
   requiredKv: finite,
   reserveRatio: finite,
+  /** Why there is no spark here (the module's own supply is below what it needs), or null when it sparks. */
+  noSparkReason: z.string().nullable(),
+  /** Energy delivered to the spark itself and how long it lasts: what compares kinds fairly (Heywood 1988, ch. 9). */
+  sparkEnergyMj: finite,
+  sparkDurationMs: finite,
+  /** True where the coil's rated secondary voltage caps the available voltage. */
+  cappedAtCeiling: z.boolean(),
 });
 
 /**
@@ -51,6 +58,10 @@ export const shownSeries = z.object({
   availableKv: z.array(finite),
   requiredKv: z.array(finite),
   crankingCount: z.number().int().min(0),
+  /** True where the module does not switch (no spark: energy and available voltage are 0 there). */
+  noSpark: z.array(z.boolean()),
+  /** Why, for the first such point; null when every point sparks. */
+  noSparkNote: z.string().nullable(),
 });
 
 export const shownSetup = z.object({
@@ -61,6 +72,8 @@ export const shownSetup = z.object({
   verdict: verdictValue,
   counts: z.object({ pass: z.number().int().min(0), caution: z.number().int().min(0), fail: z.number().int().min(0) }),
   rules: z.array(shownRule),
+  /** What to do, merged from the rules: fails first, then cautions, each once, none undoing another. */
+  actions: z.array(z.string()),
   keyPoints: z.object({ cranking: shownPoint, idle: shownPoint, mid: shownPoint, redline: shownPoint }),
   /** Lowest running rpm where available / required falls below the margin; null if it never does. */
   belowMarginFromRpm: finite.nullable(),
@@ -71,6 +84,8 @@ export const shownSetup = z.object({
   suggestedGapMm: finite.nullable(),
   /** Values taken from the person's readings, which won over the catalogue. */
   measured: z.array(shownFigure),
+  /** Figures worked out for this setup (time to the current limit, CD recharge, cylinder state at the spark ...). */
+  setupFigures: z.array(shownFigure),
   series: shownSeries,
 });
 
@@ -96,6 +111,10 @@ export const shelfSuggestion = z.object({
   ballastId: id.nullable(),
   ballastName: z.string().nullable(),
   crankingBypass: z.boolean(),
+  /** A tach, leads or plugs from the shelf fitted instead of today's (where today's would fail); null keeps today's. */
+  tachId: id.nullable(),
+  leadsId: id.nullable(),
+  plugId: id.nullable(),
   /** A plan name of at most 120 characters, for "make this a plan". */
   planName: z.string().min(1).max(120),
   setup: shownSetup,

@@ -40,6 +40,10 @@ export function shownPoint(p: OperatingPoint): ShownPoint {
     availableKv: tidy(p.availableV / 1e3),
     requiredKv: tidy(p.requiredV / 1e3),
     reserveRatio: tidy(p.reserveRatio),
+    noSparkReason: p.noSparkReason,
+    sparkEnergyMj: tidy(p.sparkEnergyJ * 1e3),
+    sparkDurationMs: tidy(p.sparkDurationS * 1e3),
+    cappedAtCeiling: p.cappedAtCeiling,
   };
 }
 
@@ -54,6 +58,8 @@ export function shownSeries(points: readonly OperatingPoint[], m = CHART_POINTS)
     availableKv: picked.map((p) => tidy(p.availableV / 1e3)),
     requiredKv: picked.map((p) => tidy(p.requiredV / 1e3)),
     crankingCount,
+    noSpark: picked.map((p) => p.noSparkReason !== null),
+    noSparkNote: picked.find((p) => p.noSparkReason !== null)?.noSparkReason ?? null,
   };
 }
 
@@ -80,6 +86,7 @@ export function shownSetup(r: SetupReport, origin: SetupOrigin, extraMeasured: r
     verdict: r.verdict,
     counts,
     rules: r.rules.map(shownRule),
+    actions: [...r.actions],
     keyPoints: {
       cranking: shownPoint(r.keyPoints.cranking),
       idle: shownPoint(r.keyPoints.idle),
@@ -92,6 +99,7 @@ export function shownSetup(r: SetupReport, origin: SetupOrigin, extraMeasured: r
     plugGapMm: tidy(origin.plugGapM * 1e3, 4),
     suggestedGapMm: gapM === null || !Number.isFinite(gapM) ? null : tidy(gapM * 1e3, 4),
     measured: [...r.inputs.filter((f) => f.provenance === 'measured').map(measuredFigure), ...extraMeasured],
+    setupFigures: r.figures.map(shownFigure),
     series: shownSeries(r.points),
   };
 }
@@ -114,8 +122,12 @@ const conditionWords: Record<ConditionName, string> = {
   ballastThermalResistanceKPerW: 'Ballast thermal resistance',
   coilDissipationLimitW: 'Coil heat limit',
   currentLimitHoldS: 'Current-limit hold time',
-  cdRiseRateVPerS: 'Capacitive-discharge rise rate',
   marginRatio: 'Voltage margin wanted',
+  polytropicIndex: 'Compression exponent (polytropic index)',
+  couplingK: 'Coil coupling between windings',
+  dynamoCutInRpm: 'Engine speed where the dynamo starts charging',
+  restingBatteryV: 'Battery at rest (not charging)',
+  secondaryCeilingV: 'Coil secondary rating when the coil gives none',
 };
 
 /** A measured input, named in words (a condition key such as crankingSupplyV becomes "Supply while cranking"). */

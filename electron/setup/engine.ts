@@ -2,7 +2,7 @@
  * A stored engine to the checker's engine spec (millimetres to metres), and its condition
  * overrides plus measured supply readings to the checker's condition inputs.
  */
-import type { Engine, Reading } from '../../db/schema.js';
+import { conditionKeys, type Engine, type Reading } from '../../db/schema.js';
 import type { ConditionInputs, EngineSpec } from '../checker/types.js';
 import { latestReading } from './parts.js';
 
@@ -24,6 +24,7 @@ export function engineSpec(e: Engine): EngineSpec {
     pointsFloatRpm: e.pointsFloatRpm ?? null,
     staticTimingDegBtdc: e.staticTimingDegBtdc,
     advanceCurve: e.advanceCurve.map((r) => ({ rpm: r.rpm, advanceDeg: r.advanceDeg })),
+    charging: e.charging,
   };
 }
 
@@ -31,15 +32,11 @@ export function engineSpec(e: Engine): EngineSpec {
 export function conditionInputs(e: Engine, readings?: readonly Reading[]): ConditionInputs {
   const out: ConditionInputs = {};
   const o = e.conditions;
-  const set = (key: keyof ConditionInputs, v: number | undefined): void => {
+  // Every settable condition, from the one list (db/conditions.ts); its keys are the checker's ConditionName.
+  for (const key of conditionKeys) {
+    const v = o[key];
     if (typeof v === 'number' && Number.isFinite(v)) out[key] = { value: v, provenance: 'engine override' };
-  };
-  set('runningSupplyV', o.runningSupplyV);
-  set('crankingSupplyV', o.crankingSupplyV);
-  set('harnessResistanceOhm', o.harnessResistanceOhm);
-  set('ambientC', o.ambientC);
-  set('underBonnetC', o.underBonnetC);
-  set('volumetricEfficiency', o.volumetricEfficiency);
+  }
   const crank = latestReading(readings, 'supply-voltage-cranking');
   if (crank && crank.value > 0) out.crankingSupplyV = { value: crank.value, provenance: 'measured' };
   const run = latestReading(readings, 'supply-voltage-running');

@@ -36,6 +36,7 @@ export function coilSpec(c: Coil, readings?: readonly Reading[], readAtC = 20): 
     forBallast: c.forBallast,
     ratedVoltageV: c.ratedVoltageV,
     maxDissipationW: c.maxDissipationW,
+    ratedSecondaryV: c.ratedSecondaryKv != null ? c.ratedSecondaryKv * 1000 : null,
   };
 }
 

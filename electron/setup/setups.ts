@@ -56,6 +56,7 @@ export function existingSetupSpec(e: Engine, parts: readonly Part[]): SetupSpec 
       x.trigger === 'magneto' && x.magnetoRatedCurrentA != null && x.magnetoFullOutputRpm != null
         ? { ratedCurrentA: x.magnetoRatedCurrentA, fullOutputRpm: x.magnetoFullOutputRpm }
         : null,
+    coilWiring: x.coilWiring ?? 'as-marked-for-earth',
   };
 }
 
@@ -91,6 +92,7 @@ export function planSetupSpec(e: Engine, plan: Plan, parts: readonly Part[], rea
     plug: plan.plugId !== null ? plugSpec(partOf(parts, plan.plugId, 'plug', 'spark plug')) : existing.plug,
     plugGapM: gapReading && gapReading.value > 0 && gapReading.value <= 3 ? gapReading.value / 1000 : plan.plugGapMm / 1000,
     magneto: null,
+    coilWiring: plan.coilWiring ?? 'as-marked-for-earth',
   };
 }
 
@@ -108,7 +110,7 @@ export function comparisonInput(e: Engine, plans: readonly Plan[], parts: readon
   return input;
 }
 
-/** The parts-bin search for an engine: every coil, module and ballast in `parts`. */
+/** The parts-bin search for an engine: every coil, module and ballast in `parts`, and the shelf's tachs, leads and plugs. */
 export function searchInput(e: Engine, parts: readonly Part[], topN = 5, options?: CheckOptions): SearchInput {
   const existing = existingSetupSpec(e, parts);
   const input: SearchInput = {
@@ -121,6 +123,12 @@ export function searchInput(e: Engine, parts: readonly Part[], topN = 5, options
     leads: existing.leads,
     plug: existing.plug,
     plugGapM: existing.plugGapM,
+    // The shelf's other tachs, leads and plugs, tried where today's make a combination fail.
+    shelf: {
+      tachs: parts.flatMap((p) => (p.kind === 'tach' ? [tachSpec(p)] : [])),
+      leads: parts.flatMap((p) => (p.kind === 'leads' ? [leadsSpec(p)] : [])),
+      plugs: parts.flatMap((p) => (p.kind === 'plug' ? [plugSpec(p)] : [])),
+    },
     conditions: conditionInputs(e),
     topN,
   };

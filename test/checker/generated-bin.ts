@@ -56,7 +56,8 @@ export function generatedModules(count: number, rnd: () => number): ModuleSpec[]
       name: `Bin module ${i + 1}`,
       moduleType: t,
       supplyMinV: 4 + 4 * rnd(),
-      supplyMaxV: 16,
+      // Every fifth a six-volt unit's 9 V maximum, which a 12 V car's running supply exceeds.
+      supplyMaxV: i % 5 === 4 ? 9 : 16,
       cutOutV: rnd() < 0.3 ? 3 + 2 * rnd() : null,
       earthPolarities: earth < 0.1 ? ['positive'] : earth < 0.3 ? ['negative', 'positive'] : ['negative'],
       minCoilResistanceOhm: cd ? 0 : 3 * rnd(),

@@ -3,6 +3,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { checkSetup, compareSetups, type RuleId, type SetupReport, type Verdict } from '../../electron/checker/index.js';
+import { REVERSED_POLARITY_FACTOR } from '../../electron/checker/breakdown.js';
 import { ballastCoil, cdModule, coil, fourCylinder, ironBallast, module, moduleSetup, pointsSetup } from './fixtures.js';
 
 const verdict = (r: SetupReport, id: RuleId): Verdict => {
@@ -82,6 +83,50 @@ describe('cranking-supply', () => {
   });
 });
 
+describe('module-supply-max', () => {
+  // A regulated 12 V car runs at about 14 V while charging (common practice: the checker's running
+  // supply); the module's maximum supply is its maker's figure.
+  const runningV = 14;
+  it('fails a 4.5-9 V six-volt module on a 12 V car, with the figures', () => {
+    const r = checkSetup(fourCylinder, moduleSetup(module({ supplyMinV: 4.5, supplyMaxV: 9 })));
+    expect(runningV > 9).toBe(true);
+    expect(verdict(r, 'module-supply-max')).toBe('fail');
+    const rule = r.rules.find((x) => x.id === 'module-supply-max')!;
+    expect(rule.figures.find((f) => f.name === 'module maximum')!.value).toBe(9);
+    expect(rule.figures.find((f) => f.name === 'running (charging) supply')!.value).toBeCloseTo(runningV, 9);
+    expect(rule.why).toMatch(/14\.00 V.*9\.00 V/);
+  });
+  it('cautions a module whose maximum the running supply comes within 5 % of', () => {
+    // 14 V against 14.5 V: 14 > 0.95 x 14.5 = 13.775, and 14 < 14.5.
+    expect(runningV > 0.95 * 14.5 && runningV < 14.5).toBe(true);
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(module({ supplyMaxV: 14.5 }))), 'module-supply-max')).toBe('caution');
+  });
+  it('passes a 16 V module on 14 V (14 < 0.95 x 16 = 15.2) and any points setup', () => {
+    expect(runningV < 0.95 * 16).toBe(true);
+    expect(verdict(checkSetup(fourCylinder, moduleSetup(module({ supplyMaxV: 16 }))), 'module-supply-max')).toBe('pass');
+    expect(verdict(checkSetup(fourCylinder, pointsSetup()), 'module-supply-max')).toBe('pass');
+  });
+  it('passes the same six-volt module on a 6 V car (7.2 V running, from memory, under 0.95 x 9 = 8.55 V)', () => {
+    expect(7.2 < 0.95 * 9).toBe(true);
+    expect(verdict(checkSetup({ ...fourCylinder, systemVoltageV: 6 }, moduleSetup(module({ supplyMinV: 4.5, supplyMaxV: 9 }))), 'module-supply-max')).toBe('pass');
+  });
+});
+
+describe('total-advance', () => {
+  // Road engines of the period total some 30 to 45 crank degrees at full advance; none uses over 60 (from memory).
+  it('passes 8 degrees static plus a 24 degree curve (32 in all)', () => {
+    expect(8 + 24).toBeLessThanOrEqual(60);
+    expect(verdict(checkSetup(fourCylinder, pointsSetup()), 'total-advance')).toBe('pass');
+  });
+  it('cautions 12 degrees static plus a 52 degree curve (64 in all), and never fails', () => {
+    const odd = { ...fourCylinder, staticTimingDegBtdc: 12, advanceCurve: [{ rpm: 1000, advanceDeg: 0 }, { rpm: 3000, advanceDeg: 52 }] };
+    expect(12 + 52).toBeGreaterThan(60);
+    const r = checkSetup(odd, pointsSetup());
+    expect(verdict(r, 'total-advance')).toBe('caution');
+    expect(r.rules.find((x) => x.id === 'total-advance')!.figures.find((f) => f.name === 'total at full advance')!.value).toBe(64);
+  });
+});
+
 describe('earth-polarity', () => {
   it('fails a negative-earth-only module on a positive-earth car', () => {
     expect(verdict(checkSetup({ ...fourCylinder, earthPolarity: 'positive' }, moduleSetup(fixedDuty())), 'earth-polarity')).toBe('fail');
@@ -102,6 +147,14 @@ describe('coil-polarity', () => {
     const rev = checkSetup(fourCylinder, pointsSetup({ coilWiring: 'reversed' }));
     expect(verdict(rev, 'coil-polarity')).toBe('caution');
     expect(rev.keyPoints.idle.requiredV / ok.keyPoints.idle.requiredV).toBeCloseTo(1 / 0.9, 6);
+  });
+  it('gives the extra voltage (1/0.9 - 1 = 11 %) and the fix, swapping the two low-tension leads (from memory: about 10 %)', () => {
+    const rule = checkSetup({ ...fourCylinder, earthPolarity: 'positive' }, pointsSetup({ coilWiring: 'reversed' })).rules.find((x) => x.id === 'coil-polarity')!;
+    expect(rule.verdict).toBe('caution');
+    expect(rule.figures.find((f) => f.name === 'extra voltage the plug needs')!.value).toBeCloseTo((1 / 0.9 - 1) * 100, 9);
+    expect(REVERSED_POLARITY_FACTOR).toBeCloseTo(1 / 0.9, 12);
+    expect(rule.why).toMatch(/about 11 % more voltage/);
+    expect(rule.action).toMatch(/^Swap the two low-tension leads on the coil\. On positive earth, the coil terminal marked - \(CB, 1\) goes to the ignition feed/);
   });
   it('fails a reversed coil that loses the margin', () => {
     expect(verdict(checkSetup(fourCylinder, pointsSetup({ coilWiring: 'reversed', plugGapM: 1.1e-3 })), 'coil-polarity')).toBe('fail');

@@ -15,6 +15,9 @@
 import { describe, expect, it } from 'vitest';
 import {
   chargeCurrentA,
+  finalCurrentA,
+  ironBallastResistanceOhm,
+  meanSquareCurrentA2,
   checkSetup,
   compareSetups,
   searchBest,
@@ -26,12 +29,17 @@ import {
   type SearchInput,
   type SetupReport,
   type SetupSpec,
+  type TachSpec,
+  type LeadsSpec,
+  type PlugSpec,
 } from '../../electron/checker/index.js';
 import { cdFouledFraction, fouledChargeTauS, fouledFluxCurrentA, fouledTimeToLimitS, reflectedShuntOhm } from '../../electron/checker/fouled.js';
 import { gapMeetsMargin, worstRatioForGap } from '../../electron/checker/gap.js';
 import { withCrankingBypass } from '../../electron/checker/cranking.js';
+import { candidateLabel } from '../../electron/checker/search.js';
 import { prepareSetup } from '../../electron/checker/prepare.js';
 import { FAIL_TESTS, RULES } from '../../electron/checker/rules/index.js';
+import { OFF_TIME_FAIL_RATIO } from '../../electron/checker/rules/spark.js';
 import { inductiveSparkDurationS } from '../../electron/checker/secondary.js';
 import { analyse, baselineOf, createSession } from '../../electron/checker/session.js';
 import { createWorkspace, evaluateGrid, type Workspace } from '../../electron/checker/sweep.js';
@@ -93,11 +101,63 @@ function redlineIndex(r: SetupReport, engine: EngineSpec): number {
   return last;
 }
 
+interface Ranked extends Combination {
+  report: SetupReport;
+  noFail: boolean;
+  worst: number;
+  energyAtRedline: number;
+  /** -1 keeps today's tach, leads, plugs; else the index on the shelf. */
+  tachIndex: number;
+  leadsIndex: number;
+  plugIndex: number;
+}
+
 interface Reference {
-  ranked: Array<Combination & { report: SetupReport; noFail: boolean; worst: number; energyAtRedline: number }>;
+  ranked: Ranked[];
+  /** `ranked` less the near-duplicates (same module, coil and accessories, identical ranking figures as one above). */
+  top: Ranked[];
   rejected: Array<[RuleId, number]>;
   withoutFail: number;
   baseline: SetupReport;
+}
+
+/** Shelf entries that are not today's part (compared field by field), by shelf index; -1 (today's) first. */
+function shelfChoices<T>(today: T | null, shelf: readonly T[] | undefined): number[] {
+  return [-1, ...(shelf ?? []).flatMap((x, i) => (today !== null && JSON.stringify(x) === JSON.stringify(today) ? [] : [i]))];
+}
+
+/**
+ * Every way to fit the shelf's tach, leads and plugs to a combination, in the documented order:
+ * pairs of (leads, plugs) with today's first, leads before plugs; within a pair, today's tach first.
+ */
+function shelfVariants(input: SearchInput, comb: Combination): Array<{ tach: number; leads: number; plug: number; setup: SetupSpec }> {
+  const shelf = input.shelf;
+  const out: Array<{ tach: number; leads: number; plug: number; setup: SetupSpec }> = [];
+  for (const leads of shelfChoices<LeadsSpec>(input.leads, shelf?.leads)) {
+    for (const plug of shelfChoices<PlugSpec>(input.plug, shelf?.plugs)) {
+      for (const tach of shelfChoices<TachSpec>(input.tach, shelf?.tachs)) {
+        const t = tach >= 0 ? shelf!.tachs[tach]! : null;
+        const l = leads >= 0 ? shelf!.leads[leads]! : null;
+        const p = plug >= 0 ? shelf!.plugs[plug]! : null;
+        const mod = input.modules[comb.moduleIndex]!;
+        const ballast = comb.ballastIndex >= 0 ? input.ballasts[comb.ballastIndex]! : null;
+        const changed = t !== null || l !== null || p !== null;
+        out.push({
+          tach,
+          leads,
+          plug,
+          setup: {
+            ...comb.setup,
+            label: candidateLabel(mod, input.coils[comb.coilIndex]!, ballast, comb.crankingBypass, changed ? { tach: t, leads: l, plug: p } : null),
+            tach: t ?? input.tach,
+            leads: l ?? input.leads,
+            plug: p ?? input.plug,
+          },
+        });
+      }
+    }
+  }
+  return out;
 }
 
 function reference(input: SearchInput): Reference {
@@ -106,12 +166,30 @@ function reference(input: SearchInput): Reference {
   const baseline = { ...checkSetup(input.engine, input.existing, input.conditions, quick), label: 'the existing setup' };
   const rejected = new Map<RuleId, number>();
   let withoutFail = 0;
-  const rows = combinations(input).map((comb) => {
-    const report = checkSetup(input.engine, comb.setup, input.conditions, quick, baseline);
+  const energyOf = (r: SetupReport): number => r.points[redlineIndex(r, input.engine)]!.storedEnergyJ;
+  const rows = combinations(input).map((comb): Ranked => {
+    let chosen = { comb, tach: -1, leads: -1, plug: -1, report: checkSetup(input.engine, comb.setup, input.conditions, quick, baseline) };
+    if (chosen.report.verdict === 'fail' && input.shelf) {
+      // Try every variant; keep today's leads and plugs if any variant with them passes (the first
+      // such tach), else the best-ranked passing variant (ties: the first in order).
+      const passing = shelfVariants(input, comb)
+        .slice(1)
+        .map((v) => ({ ...v, report: checkSetup(input.engine, v.setup, input.conditions, quick, baseline) }))
+        .filter((v) => v.report.verdict !== 'fail');
+      const sameLeadsAndPlugs = passing.find((v) => v.leads === -1 && v.plug === -1);
+      let pick = sameLeadsAndPlugs;
+      if (!pick) {
+        for (const v of passing) {
+          if (!pick || v.report.worstReserveRatio > pick.report.worstReserveRatio || (v.report.worstReserveRatio === pick.report.worstReserveRatio && energyOf(v.report) > energyOf(pick.report))) pick = v;
+        }
+      }
+      if (pick) chosen = { comb: { ...comb, setup: pick.setup }, tach: pick.tach, leads: pick.leads, plug: pick.plug, report: pick.report };
+    }
+    const report = chosen.report;
     for (const r of report.rules) if (r.verdict === 'fail') rejected.set(r.id, (rejected.get(r.id) ?? 0) + 1);
     const noFail = report.verdict !== 'fail';
     if (noFail) withoutFail++;
-    return { ...comb, report, noFail, worst: report.worstReserveRatio, energyAtRedline: report.points[redlineIndex(report, input.engine)]!.storedEnergyJ };
+    return { ...chosen.comb, report, noFail, worst: report.worstReserveRatio, energyAtRedline: energyOf(report), tachIndex: chosen.tach, leadsIndex: chosen.leads, plugIndex: chosen.plug };
   });
   // Array.prototype.sort is stable: ties keep bin order.
   const ranked = [...rows].sort((a, b) => {
@@ -119,14 +197,31 @@ function reference(input: SearchInput): Reference {
     if (a.worst !== b.worst) return b.worst - a.worst;
     return b.energyAtRedline - a.energyAtRedline;
   });
-  return { ranked, rejected: [...rejected], withoutFail, baseline };
+  const same = (a: Ranked, b: Ranked): boolean =>
+    a.moduleIndex === b.moduleIndex && a.coilIndex === b.coilIndex && a.tachIndex === b.tachIndex && a.leadsIndex === b.leadsIndex && a.plugIndex === b.plugIndex &&
+    a.noFail === b.noFail && a.worst === b.worst && a.energyAtRedline === b.energyAtRedline;
+  const top: Ranked[] = [];
+  for (const r of ranked) if (!top.some((t) => same(t, r))) top.push(r);
+  return { ranked, top, rejected: [...rejected], withoutFail, baseline };
 }
 
+/** The key a search candidate and a reference row are compared by. */
+const keyOfTop = (t: { moduleIndex: number; coilIndex: number; ballastIndex: number; crankingBypass: boolean; tachIndex: number; leadsIndex: number; plugIndex: number }): unknown[] =>
+  [t.moduleIndex, t.coilIndex, t.ballastIndex, t.crankingBypass, t.tachIndex, t.leadsIndex, t.plugIndex];
+
 const sixVoltPositive: EngineSpec = { ...fourCylinder, name: 'Test six-volt', systemVoltageV: 6, earthPolarity: 'positive', redlineRpm: 5200, pointsFloatRpm: 5000 };
+
+/** Tachs, leads and plugs on the shelf besides the bin's fitted ones (copper leads, a plain plug, a coil-negative tach). */
+const SHELF = {
+  tachs: [{ name: 'Dash tachometer', senses: 'coil-negative-pulses' as const }, { name: 'Cable tachometer', senses: 'cable' as const }, { name: 'Tach for a module output', senses: 'module-output' as const }],
+  leads: [{ name: 'Carbon leads', core: 'carbon' as const, resistancePerLeadOhm: 12000 }, { name: 'Spiral leads', core: 'spiral' as const, resistancePerLeadOhm: 500 }],
+  plugs: [{ name: 'Resistor plug', resistor: true, resistorOhm: 5000, gapMinM: 0.6e-3, gapMaxM: 1.1e-3 }],
+};
 
 const cases: Array<[string, SearchInput]> = [
   ['a 12 V negative-earth four, default conditions', generatedSearch({ coils: 12, modules: 8, ballasts: 2, seed: 7, rpmPoints: 60, topN: 8 })],
   ['a 6 V positive-earth four on a cold morning, Paschen breakdown', sixVoltBin()],
+  ['a 12 V four with tachs, leads and plugs on the shelf', { ...generatedSearch({ coils: 8, modules: 8, ballasts: 1, seed: 19, rpmPoints: 40, topN: 12 }), shelf: SHELF }],
 ];
 
 /** The generated bin made over for a 6 V positive-earth car: most modules run on 6 V and either earth. */
@@ -152,11 +247,9 @@ describe('parts-bin search against checking every combination in full', () => {
       // Same counts, and the same key order (first failing combination in bin order, rules in report order).
       expect(Object.entries(got.rejectedByRule)).toEqual(ref.rejected);
       const topN = input.topN ?? 5;
-      expect(got.top.map((t) => [t.moduleIndex, t.coilIndex, t.ballastIndex, t.crankingBypass])).toEqual(
-        ref.ranked.slice(0, topN).map((r) => [r.moduleIndex, r.coilIndex, r.ballastIndex, r.crankingBypass]),
-      );
+      expect(got.top.map(keyOfTop)).toEqual(ref.top.slice(0, topN).map(keyOfTop));
       for (let i = 0; i < topN; i++) {
-        const r = ref.ranked[i]!;
+        const r = ref.top[i]!;
         expect(got.top[i]!.report).toEqual(checkSetup(input.engine, r.setup, input.conditions, input.options, ref.baseline));
       }
       // The bin is worth testing on: some pass, most rules reject something, and some
@@ -185,8 +278,29 @@ describe('parts-bin search against checking every combination in full', () => {
     const input = { ...generatedSearch({ coils: 6, modules: 8, ballasts: 1, seed: 3, rpmPoints: 30 }), options: { rpmPoints: 30, skipGapSuggestion: true } };
     const ref = reference(input);
     const got = searchBest({ ...input, topN: ref.ranked.length });
-    expect(got.top.map((t) => [t.moduleIndex, t.coilIndex, t.ballastIndex, t.crankingBypass])).toEqual(ref.ranked.map((r) => [r.moduleIndex, r.coilIndex, r.ballastIndex, r.crankingBypass]));
-    got.top.forEach((t, i) => expect(t.report.verdict).toBe(ref.ranked[i]!.report.verdict));
+    expect(got.top.map(keyOfTop)).toEqual(ref.top.map(keyOfTop));
+    got.top.forEach((t, i) => expect(t.report.verdict).toBe(ref.top[i]!.report.verdict));
+    // CD units fed from terminal 15 ignore a ballast: their ballast variants are dropped as near-duplicates.
+    expect(ref.top.length).toBeLessThan(ref.ranked.length);
+  });
+
+  it('fits the shelf\'s leads, plugs and tach only where they turn a fail into no fail, and never multiplies the bin', () => {
+    const plain = generatedSearch({ coils: 8, modules: 8, ballasts: 1, seed: 19, rpmPoints: 40, topN: 40 });
+    const without = searchBest(plain);
+    const withShelf = searchBest({ ...plain, shelf: SHELF });
+    expect(withShelf.evaluated).toBe(without.evaluated);
+    // Copper leads on modules that want suppression, and coil-negative tachs on CD units without a tach output, are cured from the shelf.
+    expect(withShelf.withoutFail).toBeGreaterThan(without.withoutFail);
+    expect((withShelf.rejectedByRule['suppressed-leads'] ?? 0)).toBeLessThan(without.rejectedByRule['suppressed-leads'] ?? 0);
+    expect(withShelf.top.some((t) => t.leadsIndex >= 0 || t.plugIndex >= 0)).toBe(true);
+    for (const t of withShelf.top) {
+      if (t.tachIndex >= 0 || t.leadsIndex >= 0 || t.plugIndex >= 0) {
+        expect(t.report.verdict).not.toBe('fail');
+        expect(t.report.label).toMatch(/; fit /);
+      }
+    }
+    // A module whose maximum supply is below the running supply never ranks among those without a fail.
+    for (const t of withShelf.top) if (plain.modules[t.moduleIndex]!.supplyMaxV < 14) expect(t.report.verdict).toBe('fail');
   });
 });
 
@@ -209,6 +323,8 @@ function oddSetups(): SetupSpec[] {
     moduleSetup(cd, { module: { ...cd, cd: null } }),
     moduleSetup({ ...cl, moduleType: 'transistor-points', currentLimitA: null, maxDutyFraction: null, stallShutOff: false }, { coilWiring: 'reversed', plugGapM: 1.1e-3, coil: coil({ turnsRatio: 50 }) }),
     moduleSetup({ ...cl, needsSuppressedLeads: true }, { leads: { name: 'Copper', core: 'copper', resistancePerLeadOhm: 0 }, plugGapM: Number.NaN }),
+    // A six-volt unit (4.5 to 9 V) on a 12 V car: over its maximum whenever the engine runs.
+    moduleSetup({ ...cl, name: 'Six-volt unit', supplyMinV: 4.5, supplyMaxV: 9 }),
     // A fixed-duty module holding a current limit for most of a long dwell burns tens of watts.
     moduleSetup({ ...cl, name: 'Hot fixed duty', moduleType: 'breakerless-fixed-duty', fixedDutyFraction: 0.7, maxDutyFraction: null }, { coil: coil({ primaryResistanceOhm20C: { value: 0.6, provenance: 'catalogue' } }) }),
   ];
@@ -242,7 +358,7 @@ describe("each rule's fail test", () => {
     }
     expect(disagreements).toEqual([]);
     // Every rule that can fail does so somewhere here, and passes somewhere else.
-    expect([...failedSomewhere].sort()).toEqual(FAIL_TESTS.map(([id]) => id).filter((id) => id !== 'plug-gap').sort());
+    expect([...failedSomewhere].sort()).toEqual(FAIL_TESTS.map(([id]) => id).filter((id) => id !== 'plug-gap' && id !== 'total-advance').sort());
     expect(passedSomewhere.size).toBe(FAIL_TESTS.length);
   });
 });
@@ -250,7 +366,7 @@ describe("each rule's fail test", () => {
 // ---------------------------------------------------------------------------------------------
 // The cranking-bypass twin and the sweep.
 
-const COLUMNS = ['supplyV', 'resistanceOhm', 'dwellS', 'offS', 'currentA', 'energyJ', 'availableV', 'requiredV', 'reserveRatio', 'riseS', 'durationS', 'fouledV', 'cdChargeV', 'multiSpark', 'moduleW'] as const;
+const COLUMNS = ['supplyV', 'resistanceOhm', 'dwellS', 'offS', 'currentA', 'energyJ', 'availableV', 'requiredV', 'reserveRatio', 'riseS', 'durationS', 'fouledV', 'cdChargeV', 'multiSpark', 'noSpark', 'moduleW'] as const;
 const columns = (ws: Workspace): number[][] => COLUMNS.map((k) => Array.from(ws[k]));
 
 describe('the cranking-bypass twin', () => {
@@ -307,6 +423,35 @@ describe('the verdict-only sweep', () => {
       for (const k of others) expect(Array.from(verdict[k]), `${setup.label} ${k}`).toEqual(Array.from(full[k]));
       expect(Array.from(verdict.fouledV).every((v) => Number.isNaN(v)), setup.label).toBe(true);
     }
+  });
+});
+
+describe("the verdict-only sweep's skipped spark durations", () => {
+  it('leaves a duration out only where the off time cannot fail (off / duration >= the fail ratio), and gives every other column', () => {
+    const s = createSession(fourCylinder);
+    const input = generatedSearch({ coils: 6, modules: 10, ballasts: 1, seed: 23 });
+    const full = createWorkspace(s.grids.sweep.n);
+    const verdict = createWorkspace(s.grids.sweep.n);
+    const others = COLUMNS.filter((k) => k !== 'fouledV' && k !== 'durationS');
+    let skipped = 0;
+    let kept = 0;
+    for (const setup of [...combinations(input).map((c) => c.setup), ...oddSetups()]) {
+      const p = prepareSetup(s.engine, setup, s.conditions, s.model);
+      evaluateGrid(p, s.grids.sweep, 0.8e-3, full);
+      evaluateGrid(p, s.grids.sweep, 0.8e-3, verdict, undefined, { verdictOnly: true, offTimeFailRatio: OFF_TIME_FAIL_RATIO });
+      for (const k of others) expect(Array.from(verdict[k]), `${setup.label} ${k}`).toEqual(Array.from(full[k]));
+      for (let i = 0; i < s.grids.sweep.n; i++) {
+        if (Number.isNaN(verdict.durationS[i]!)) {
+          skipped++;
+          expect(full.offS[i]! / full.durationS[i]!, `${setup.label} point ${i}`).toBeGreaterThanOrEqual(OFF_TIME_FAIL_RATIO);
+        } else {
+          kept++;
+          expect(verdict.durationS[i], `${setup.label} point ${i}`).toBe(full.durationS[i]);
+        }
+      }
+    }
+    expect(skipped).toBeGreaterThan(0);
+    expect(kept).toBeGreaterThan(0);
   });
 });
 
@@ -375,9 +520,29 @@ function pointByPointMismatches(s: ReturnType<typeof createSession>, g: ReturnTy
     const p = prepareSetup(s.engine, setup, s.conditions, s.model);
     evaluateGrid(p, g, 0.7e-3, ws);
     for (let i = 0; i < g.n; i++) {
+      if (ws.noSpark[i] === 1) {
+        // A module below its minimum supply does not switch: no current, so 0.5 L i^2 = 0 and no voltage.
+        for (const [what, v] of [['break current', ws.currentA[i]!], ['energy', ws.energyJ[i]!], ['available', ws.availableV[i]!], ['reserve', ws.reserveRatio[i]!]] as const) check(what, setup, i, v, 0);
+        continue;
+      }
       const cranking = g.cranking[i] === 1;
-      const iFinal = cranking ? p.iFinalCrankingA : p.iFinalRunningA;
-      const tau = cranking ? p.tauCrankingS : p.tauRunningS;
+      const perRpm = p.ironBallast !== null && !cranking;
+      // An iron ballast settles at each running rpm's own mean-square current (ballast.ts), so
+      // there the circuit follows from the point's resistance; otherwise from the supply case.
+      const iFinal = perRpm ? finalCurrentA(ws.supplyV[i]!, p.switchDropV, ws.resistanceOhm[i]!) : cranking ? p.iFinalCrankingA : g.resting[i] === 1 ? p.iFinalRestingA : p.iFinalRunningA;
+      const tau = perRpm ? p.primaryInductanceH / ws.resistanceOhm[i]! : cranking ? p.tauCrankingS : p.tauRunningS;
+      if (perRpm) {
+        // Steady-state energy balance T = T_amb + theta <i^2> R(T) (Incropera & DeWitt), the
+        // resistance being the rest of the circuit plus R(T), to the solver's tolerance.
+        const b = p.ironBallast!;
+        const tK = ws.ballastK[i]!;
+        const rb = ironBallastResistanceOhm(b.coldOhm, tK);
+        check('ballast resistance', setup, i, ws.resistanceOhm[i]!, b.restOhm + rb);
+        const ms = meanSquareCurrentA2(iFinal, tau, dwellTimeS(p, g.periodS[i]!, g.rpm[i]!, iFinal, tau), g.periodS[i]!, p.limitA);
+        const residualK = b.ambientK + b.thetaKPerW * ms * rb - tK;
+        // The solver stops once its next step would be under 1e-4 K (the slope is of order -1).
+        if (!(Math.abs(residualK) < 1e-3)) out.push(`${setup.label} ballast balance at point ${i}: ${residualK} K off`);
+      }
       if (p.mode === DwellMode.Cd) {
         // Fouled plug on CD: the clean peak times the constant-current-pulse fraction (fouled.ts).
         check('fouled peak', setup, i, ws.fouledV[i]!, ws.availableV[i]! * cdFouledFraction(ws.riseS[i]!, p.fouledShuntOhm, p.secondaryCapacitanceF));
@@ -394,7 +559,7 @@ function pointByPointMismatches(s: ReturnType<typeof createSession>, g: ReturnTy
       // Fouled plug: the flux current of a charge loaded by the reflected shunt (Thevenin seen by
       // Lp, fouled.ts), times the parallel-RLC peak per ampere, capped by the clamp; a magneto
       // keeps its clean break current.
-      const r = cranking ? p.rCrankingOhm : p.rRunningOhm;
+      const r = ws.resistanceOhm[i]!;
       const rsh = reflectedShuntOhm(p.fouledShuntOhm, p.secondaryResistanceOhm, p.n);
       const tauF = fouledChargeTauS(tau, r, rsh);
       const flux = p.mode === DwellMode.Magneto ? current : fouledFluxCurrentA(iFinal, tauF, dwell, p.limitA, fouledTimeToLimitS(iFinal, tauF, r, rsh, p.limitA), p.primaryInductanceH / rsh);

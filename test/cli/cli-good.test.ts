@@ -23,6 +23,8 @@ const nullable = new Set([
   'suggestedGapM',
   'gap',
   'ballast',
+  'noSparkReason',
+  'ballastTemperatureK',
 ]);
 
 function scan(value: unknown, path: string, problems: string[]): void {

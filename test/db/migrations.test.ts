@@ -144,6 +144,27 @@ const perVersion: Record<number, (db: Database.Database) => void> = {
     expect(corrupt).toEqual([]);
     old.close();
   },
+  3: (db) => {
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'sheet_ticks']);
+    seedPlan(db);
+    // A plan written without the column (as versions 1 and 2 wrote every plan) reads as wired as marked.
+    expect(db.prepare('SELECT coil_wiring FROM plans WHERE id = 1').get()).toEqual({ coil_wiring: 'as-marked-for-earth' });
+    db.prepare("UPDATE plans SET coil_wiring = 'reversed' WHERE id = 1").run();
+    // Only the two wirings, and never NULL.
+    expect(() => db.prepare("UPDATE plans SET coil_wiring = 'sideways' WHERE id = 1").run()).toThrow(/CHECK/);
+    expect(() => db.prepare('UPDATE plans SET coil_wiring = NULL WHERE id = 1').run()).toThrow(/NOT NULL/);
+
+    // Plans stored by version 2 keep every field through the upgrade and read back through the repository.
+    const old = rawMemory();
+    migrate(old, migrations, 2);
+    seedPlan(old);
+    migrate(old, migrations, 3);
+    const corrupt: unknown[] = [];
+    const plan = createRepositories(old, { onCorruptRow: (r) => corrupt.push(r) }).plans.get(1);
+    expect(corrupt).toEqual([]);
+    expect(plan).toMatchObject({ name: 'p', coilId: 1, moduleFeed: 'switched-15', plugGapMm: 0.8, coilWiring: 'as-marked-for-earth' });
+    old.close();
+  },
 };
 
 /** An engine with one plan (id 1), in raw SQL, as versions 1 and 2 store them. */

@@ -212,7 +212,14 @@ describe('a version-1 file', () => {
     const oldRepos = createRepositories(raw);
     const coil = oldRepos.parts.create(coilIn);
     const engine = oldRepos.engines.create(engineIn({ coilId: coil.id }));
-    const p = oldRepos.plans.create(planIn(engine.id, { coilId: coil.id }));
+    // The plan as version 1 wrote it (today's repository writes columns a version-1 file lacks).
+    const p = {
+      id: Number(
+        raw
+          .prepare("INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at) VALUES (?, 'p', 'draft', ?, 0, 'switched-15', 0.8, '2024-03-09T00:00:00Z', '2024-03-09T00:00:00Z')")
+          .run(engine.id, coil.id).lastInsertRowid,
+      ),
+    };
     const insert = raw.prepare("INSERT INTO readings (plan_id, quantity, value, unit, taken_on, note, created_at) VALUES (?, ?, ?, ?, '2024-03-09', '', '2024-03-09T00:00:00Z')");
     insert.run(p.id, 'coil-primary-resistance', 1400, 'mohm');
     insert.run(p.id, 'plug-gap', 0.025, 'inch');

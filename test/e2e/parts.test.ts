@@ -242,6 +242,10 @@ describe('the parts screen', () => {
     expect(await messageBeside(page, 'Maximum duty (% of each firing period)', 'maxDutyFraction')).toBe('Maximum duty must be below 100 %.');
     await page.getByLabel('Maximum duty (% of each firing period)').fill('75');
     await page.getByRole('button', { name: 'Save the part' }).click();
+    // A part that contradicts itself: a 6 A limit on a switch rated for 4 A is refused beside the limit.
+    expect(await messageBeside(page, 'Current limit (A)', 'currentLimitA')).toBe("The current limit cannot be above the module's own maximum current (4 A).");
+    await page.getByLabel('Maximum switched current (A)').fill('8');
+    await page.getByRole('button', { name: 'Save the part' }).click();
     await page.getByTestId('editor-status').getByText(`Saved “${name}”.`).waitFor();
     const limited = await api<StoredPart>(host, 'parts.get', { id: cdUnit.id });
     expect(limited.moduleType).toBe('breakerless-current-limited');

@@ -191,6 +191,17 @@ describe('plan status', () => {
     expect((await ok<Plan>('plans.get', { id: p.id })).status).toBe('done');
   });
 
+  it('an edit that leaves the status out keeps the status the work reached; one that names it sets it', async () => {
+    const p = await planNamed('Fixed-duty');
+    await ok('check.plans', { engineId: p.engineId, planIds: [p.id] });
+    // An editor opened before the weighing still holds 'draft': it sends the fields without a status.
+    const { id: _id, updatedAt: _at, status: _status, ...fields } = p;
+    const edited = await ok<Plan>('plans.update', { id: p.id, plan: { ...fields, notes: 'Edited after weighing.' } });
+    expect(edited.status).toBe('checked');
+    expect(edited.notes).toBe('Edited after weighing.');
+    expect((await ok<Plan>('plans.update', { id: p.id, plan: { ...fields, status: 'draft' } })).status).toBe('draft');
+  });
+
   it('a reading out of band keeps the plan at wired (the latest reading per quantity counts)', async () => {
     const p = await planNamed('Fixed-duty');
     let a = await ok<SheetAnswer>('sheet.get', { planId: p.id });

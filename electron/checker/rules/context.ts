@@ -4,7 +4,7 @@
 import type { RpmGrid } from '../grid.js';
 import type { PreparedSetup } from '../prepare.js';
 import type { Workspace } from '../sweep.js';
-import type { EngineSpec, Figure, KeyOnReport, PlugGapSuggestion, ResolvedConditions, RuleId, RuleResult, SetupSpec, Verdict } from '../types.js';
+import type { EngineSpec, Figure, Intent, KeyOnReport, PlugGapSuggestion, ResolvedConditions, RuleId, RuleResult, SetupSpec, Verdict } from '../types.js';
 
 export interface Baseline {
   label: string;
@@ -41,8 +41,8 @@ export type Rule = (ctx: RuleContext) => RuleResult;
  */
 export type FailTest = (ctx: RuleContext) => boolean;
 
-export function result(id: RuleId, title: string, verdict: Verdict, figures: Figure[], why: string, action: string): RuleResult {
-  return { id, title, verdict, figures, why, action };
+export function result(id: RuleId, title: string, verdict: Verdict, figures: Figure[], why: string, action: string, intents?: Intent[]): RuleResult {
+  return intents && intents.length > 0 ? { id, title, verdict, figures, why, action, intents } : { id, title, verdict, figures, why, action };
 }
 
 /** A figure, forced finite so that no report ever carries NaN or Infinity. */

@@ -26,7 +26,7 @@ export const keyOnHeat: Rule = (ctx) => {
   if (!keyOn.currentFlows) return result(id, title, 'pass', figures, 'No coil current flows with the engine stopped.', 'Nothing to do.');
   const why = 'With the key on and the engine stopped the coil can carry its full current indefinitely; a coil that overheats can split and leak its oil.';
   if (keyOn.coilDissipationW > limit || keyOn.moduleDissipationW > keyOnModuleLimitW(ctx)) {
-    return result(id, title, 'fail', figures, `${why} Here it would carry ${fmt(keyOn.currentA)} A and the coil would dissipate ${fmt(keyOn.coilDissipationW, 0)} W against about ${fmt(limit, 0)} W it can shed.`, 'Fit the ballast this coil needs, or a module with a stall shut-off; never leave the key on with the engine stopped.');
+    return result(id, title, 'fail', figures, `${why} Here it would carry ${fmt(keyOn.currentA)} A and the coil would dissipate ${fmt(keyOn.coilDissipationW, 0)} W against about ${fmt(limit, 0)} W it can shed.`, 'Fit the ballast this coil needs, or a module with a stall shut-off; never leave the key on with the engine stopped.', ['ballast:add']);
   }
   if (keyOn.coilDissipationW > 0.5 * limit || keyOn.moduleDissipationW > MODULE_COMFORT_W) {
     return result(id, title, 'caution', figures, `${why} Here the coil would dissipate ${fmt(keyOn.coilDissipationW, 0)} W.`, 'Do not leave the key on with the engine stopped; a module with a stall shut-off removes the risk.');
@@ -45,7 +45,7 @@ export const moduleHeat: Rule = (ctx) => {
   const peak = maxOver(ws.moduleW, 0, ws.n - 1);
   const figures = [fig('highest module dissipation', peak.value, 'W'), fig('at rpm', grid.rpm[peak.index]!, 'rpm')];
   const why = 'A module that limits current burns the excess as heat in its transistor; it needs a cool, flat, metal mounting.';
-  if (peak.value > 2 * MODULE_COMFORT_W) return result(id, title, 'fail', figures, `${why} It would dissipate ${fmt(peak.value)} W.`, 'Add resistance to the coil circuit or choose a coil of higher resistance so the module limits less.');
+  if (peak.value > 2 * MODULE_COMFORT_W) return result(id, title, 'fail', figures, `${why} It would dissipate ${fmt(peak.value)} W.`, 'Add resistance to the coil circuit or choose a coil of higher resistance so the module limits less.', ['ballast:add', 'coil-resistance:raise']);
   if (peak.value > MODULE_COMFORT_W) return result(id, title, 'caution', figures, `${why} It would dissipate ${fmt(peak.value)} W.`, 'Mount the module on bare metal away from the exhaust, with heat-sink compound.');
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };

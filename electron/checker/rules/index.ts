@@ -6,8 +6,9 @@
 import type { RuleId, RuleResult, Verdict } from '../types.js';
 import type { FailTest, Rule, RuleContext } from './context.js';
 import { ballastPlan, ballastPlanFails, coilResistanceFloor, coilResistanceFloorFails, peakCurrent, peakCurrentFails } from './resistance.js';
-import { crankingSupply, crankingSupplyFails, earthPolarity, earthPolarityFails, sixVolt, sixVoltFails } from './supply.js';
+import { crankingSupply, crankingSupplyFails, earthPolarity, earthPolarityFails, moduleSupplyMax, moduleSupplyMaxFails, sixVolt, sixVoltFails } from './supply.js';
 import { coilPolarity, coilPolarityFails } from './polarity.js';
+import { totalAdvance, totalAdvanceFails } from './advance.js';
 import { tachFails, tachRule } from './tach.js';
 import { offTime, offTimeFails, plugGap, plugGapFails, sparkEnergy, sparkEnergyFails, sparkRate, sparkRateFails, voltageReserve, voltageReserveFails } from './spark.js';
 import { keyOnHeat, keyOnHeatFails, moduleHeat, moduleHeatFails } from './heat.js';
@@ -20,6 +21,7 @@ export const RULES: readonly Rule[] = [
   peakCurrent,
   ballastPlan,
   crankingSupply,
+  moduleSupplyMax,
   keyOnHeat,
   sixVolt,
   voltageReserve,
@@ -27,6 +29,7 @@ export const RULES: readonly Rule[] = [
   sparkRate,
   offTime,
   plugGap,
+  totalAdvance,
   coilPolarity,
   condenser,
   suppressedLeads,
@@ -45,6 +48,7 @@ export const FAIL_TESTS: ReadonlyArray<readonly [RuleId, FailTest]> = [
   ['peak-current', peakCurrentFails],
   ['ballast-plan', ballastPlanFails],
   ['cranking-supply', crankingSupplyFails],
+  ['module-supply-max', moduleSupplyMaxFails],
   ['key-on-heat', keyOnHeatFails],
   ['six-volt', sixVoltFails],
   ['voltage-reserve', voltageReserveFails],
@@ -52,12 +56,27 @@ export const FAIL_TESTS: ReadonlyArray<readonly [RuleId, FailTest]> = [
   ['spark-rate', sparkRateFails],
   ['off-time', offTimeFails],
   ['plug-gap', plugGapFails],
+  ['total-advance', totalAdvanceFails],
   ['coil-polarity', coilPolarityFails],
   ['condenser', condenserFails],
   ['suppressed-leads', suppressedLeadsFails],
   ['tach', tachFails],
   ['module-heat', moduleHeatFails],
 ];
+
+/**
+ * Rules whose verdict another tachometer can change: the tach rule alone (a tachometer changes no
+ * other input). The parts-bin search tries the shelf's tachs only where nothing else fails.
+ */
+export const TACH_RULES: ReadonlySet<RuleId> = new Set<RuleId>(['tach']);
+
+/**
+ * Rules whose verdict other HT leads or plugs can change: the suppression they give, and the
+ * secondary resistance they add (spark duration, the CD transfer loop, the damped peak, and so the
+ * reserve). Every other rule reads only the primary side, the module and the engine.
+ * search-equivalence.test.ts holds the search, which relies on this list, to trying every variant.
+ */
+export const LEADS_PLUG_RULES: ReadonlySet<RuleId> = new Set<RuleId>(['suppressed-leads', 'voltage-reserve', 'spark-energy', 'off-time', 'plug-gap', 'coil-polarity']);
 
 export function runRules(ctx: RuleContext): RuleResult[] {
   return RULES.map((r) => r(ctx));

@@ -40,13 +40,13 @@ export const coilResistanceFloor: Rule = (ctx) => {
   ];
   const why = 'Below the module\'s minimum the coil draws more current than the switching transistor is built for; it overheats or fails, often at key-on or idle.';
   if (runCold < floor) {
-    return result(id, title, 'fail', figures, `${why} Here the coil circuit reads ${fmt(runCold, 2)} ohm cold against a minimum of ${fmt(floor, 2)} ohm.`, hasBallast ? 'Choose a coil of higher primary resistance, or a module rated for this coil.' : 'Fit a ballast that brings the total above the minimum, or choose a higher-resistance coil.');
+    return result(id, title, 'fail', figures, `${why} Here the coil circuit reads ${fmt(runCold, 2)} ohm cold against a minimum of ${fmt(floor, 2)} ohm.`, hasBallast ? 'Choose a coil of higher primary resistance, or a module rated for this coil.' : 'Fit a ballast that brings the total above the minimum, or choose a higher-resistance coil.', hasBallast ? ['coil-resistance:raise'] : ['ballast:add', 'coil-resistance:raise']);
   }
   if (crank < floor) {
-    return result(id, title, 'caution', figures, `${why} With the cranking bypass the ballast is shorted out while the starter turns, leaving ${fmt(crank, 2)} ohm.`, 'Brief cranking is usually tolerated; check the module maker\'s note on cranking bypass, or drop the bypass wire.');
+    return result(id, title, 'caution', figures, `${why} With the cranking bypass the ballast is shorted out while the starter turns, leaving ${fmt(crank, 2)} ohm.`, 'Brief cranking is usually tolerated; check the module maker\'s note on cranking bypass, or drop the bypass wire.', ['bypass:remove']);
   }
   if (hasBallast && p.coilColdOhm < floor) {
-    return result(id, title, 'caution', figures, `${why} The coil alone (${fmt(p.coilColdOhm, 2)} ohm) is below the minimum; only the ballast keeps it safe.`, 'Keep the ballast in circuit and never bridge it out.');
+    return result(id, title, 'caution', figures, `${why} The coil alone (${fmt(p.coilColdOhm, 2)} ohm) is below the minimum; only the ballast keeps it safe.`, 'Keep the ballast in circuit and never bridge it out.', ['ballast:keep']);
   }
   return result(id, title, 'pass', figures, why, 'Nothing to do: the coil circuit stays above the module minimum hot and cold.');
 };
@@ -71,7 +71,7 @@ export const peakCurrent: Rule = (ctx) => {
     // Points contacts are generally reckoned good for about 4 to 5 A before they pit fast (from memory).
     const figures = [fig('peak current at break', peak.value, 'A'), fig('at rpm', rpm, 'rpm'), fig('points comfortable limit (from memory)', 5, 'A'), fig('key-on current', keyOn.currentA, 'A')];
     const why = 'Points contacts burn and pit faster the more current they break; above about 5 A they need frequent dressing.';
-    if (peak.value > POINTS_FAIL_A) return result(id, title, 'fail', figures, why, 'Fit the ballast the coil needs, or a higher-resistance coil.');
+    if (peak.value > POINTS_FAIL_A) return result(id, title, 'fail', figures, why, 'Fit the ballast the coil needs, or a higher-resistance coil.', ['ballast:add', 'coil-resistance:raise']);
     if (peak.value > 5) return result(id, title, 'caution', figures, why, 'Expect short points life; a transistor-assisted switch would relieve the contacts.');
     return result(id, title, 'pass', figures, why, 'Nothing to do.');
   }
@@ -79,10 +79,10 @@ export const peakCurrent: Rule = (ctx) => {
   const figures = [fig('peak current at break', peak.value, 'A'), fig('at rpm', rpm, 'rpm'), fig('key-on current', keyOn.currentA, 'A'), fig('module rating', m.maxCurrentA, 'A')];
   const why = 'A switching transistor driven beyond its rated current fails, often without warning and usually on the road.';
   if (worst > m.maxCurrentA) {
-    return result(id, title, 'fail', figures, `${why} The coil would reach ${fmt(worst, 2)} A against a rating of ${fmt(m.maxCurrentA, 2)} A.`, 'Add ballast resistance, or choose a higher-resistance coil or a module rated for more current.');
+    return result(id, title, 'fail', figures, `${why} The coil would reach ${fmt(worst, 2)} A against a rating of ${fmt(m.maxCurrentA, 2)} A.`, 'Add ballast resistance, or choose a higher-resistance coil or a module rated for more current.', ['ballast:add', 'coil-resistance:raise']);
   }
   if (worst > 0.9 * m.maxCurrentA) {
-    return result(id, title, 'caution', figures, `${why} The coil comes within 10 % of the rating.`, 'Leave headroom: a little more resistance in the coil circuit costs little spark.');
+    return result(id, title, 'caution', figures, `${why} The coil comes within 10 % of the rating.`, 'Leave headroom: a little more resistance in the coil circuit costs little spark.', ['ballast:add']);
   }
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
@@ -119,25 +119,25 @@ export const ballastPlan: Rule = (ctx) => {
   const needsBallast = needsBallastOf(ctx);
   const why = 'A ballast coil is wound for about half the battery voltage: without its resistor it overheats, with it and no cranking bypass it sparks weakly while the starter pulls the battery down.';
   if (p.kind === 'capacitive-discharge') {
-    if (b) return result(id, title, 'caution', figures, 'A capacitive-discharge module wants the full battery voltage; a ballast only starves its charger.', 'Remove the ballast, or bridge it, and feed the module from terminal 15.');
+    if (b) return result(id, title, 'caution', figures, 'A capacitive-discharge module wants the full battery voltage; a ballast only starves its charger.', 'Remove the ballast, or bridge it, and feed the module from terminal 15.', ['ballast:remove']);
     return result(id, title, 'pass', figures, 'No ballast, as a capacitive-discharge module wants.', 'Nothing to do.');
   }
   if (p.kind === 'breakerless-current-limited') {
     const floor = setup.module?.minCoilResistanceOhm ?? 0;
     if (b && p.coilColdOhm >= floor) {
-      return result(id, title, 'caution', figures, 'This module limits the coil current itself; the ballast only lowers the energy at high rpm.', 'Remove the ballast (or bridge it), which the module\'s own current limit makes safe for this coil.');
+      return result(id, title, 'caution', figures, 'This module limits the coil current itself; the ballast only lowers the energy at high rpm.', 'Remove the ballast (or bridge it), which the module\'s own current limit makes safe for this coil.', ['ballast:remove']);
     }
     if (b) return result(id, title, 'pass', figures, 'The coil alone is below the module\'s minimum resistance, so the ballast stays.', 'Keep the ballast in circuit.');
     return result(id, title, 'pass', figures, 'The module limits the coil current; no ballast is needed.', 'Nothing to do.');
   }
   if (needsBallast && !b) {
-    return result(id, title, 'fail', figures, why, 'Keep or fit the ballast this coil is made for (or choose a full-voltage coil).');
+    return result(id, title, 'fail', figures, why, 'Keep or fit the ballast this coil is made for (or choose a full-voltage coil).', ['ballast:add']);
   }
   if (needsBallast && b && !setup.crankingBypass) {
-    return result(id, title, 'caution', figures, why, 'Keep the ballast and add a cranking bypass from the starter solenoid to the coil, so it gets full battery voltage while cranking.');
+    return result(id, title, 'caution', figures, why, 'Keep the ballast and add a cranking bypass from the starter solenoid to the coil, so it gets full battery voltage while cranking.', ['ballast:keep', 'bypass:add']);
   }
   if (!needsBallast && b) {
-    return result(id, title, 'caution', figures, 'This coil is made for the full system voltage; a ballast in front of it only weakens the spark.', 'Remove the ballast (or bridge it) for this coil.');
+    return result(id, title, 'caution', figures, 'This coil is made for the full system voltage; a ballast in front of it only weakens the spark.', 'Remove the ballast (or bridge it) for this coil.', ['ballast:remove']);
   }
   return result(id, title, 'pass', figures, b ? 'The ballast suits this coil and the cranking bypass restores full voltage while cranking.' : 'No ballast, and this coil does not need one.', b ? 'Keep the ballast and the cranking bypass.' : 'Nothing to do.');
 };

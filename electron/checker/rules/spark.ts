@@ -1,6 +1,7 @@
 /**
  * Rules about the spark itself across rpm: energy, voltage reserve, spark rate, off time, plug gap.
  */
+import type { Intent } from '../types.js';
 import { fig, fmt, isModuleKind, minOver, result, type FailTest, type Rule, type RuleContext } from './context.js';
 
 /**
@@ -17,7 +18,11 @@ export const sparkEnergy: Rule = (ctx) => {
   const figures = [fig('lowest energy, idle to redline', low.value * 1000, 'mJ'), fig('at rpm', grid.rpm[low.index]!, 'rpm'), fig('energy at cranking', ws.energyJ[0]! * 1000, 'mJ')];
   const why = 'Energy is what keeps a spark alight through a lean or rich mixture; it falls with rpm as the coil has less time to charge.';
   if (low.value < ENERGY_FLOOR_J) {
-    return result(id, title, 'fail', figures, `${why} It drops to ${fmt(low.value * 1000)} mJ by ${fmt(grid.rpm[low.index]!, 0)} rpm, below the ${fmt(ENERGY_FLOOR_J * 1000)} mJ we treat as the least to rely on.`, 'Choose a coil of lower inductance or resistance, or a module that charges it longer.');
+    if (ws.noSpark[low.index] === 1) {
+      return result(id, title, 'fail', figures, `${why} At ${fmt(grid.rpm[low.index]!, 0)} rpm the module's own supply is below what it needs to switch, so there is no spark at all.`, 'Give the module the supply it needs (see "Module supply while cranking" and "System voltage"), or choose a module that works at this voltage.', ['feed:improve']);
+    }
+    const more = lowEnergyAdvice(ctx);
+    return result(id, title, 'fail', figures, `${why} It drops to ${fmt(low.value * 1000)} mJ by ${fmt(grid.rpm[low.index]!, 0)} rpm, below the ${fmt(ENERGY_FLOOR_J * 1000)} mJ we treat as the least to rely on.`, more.text, more.intents);
   }
   if (baseline) {
     let worstRel = Infinity;
@@ -36,8 +41,11 @@ export const sparkEnergy: Rule = (ctx) => {
       }
     }
   }
+  if (ws.noSpark[0] === 1) {
+    return result(id, title, 'caution', figures, `${why} While cranking the module's own supply is below what it needs to switch, so there is no spark to start on.`, 'Give the module the supply it needs while cranking (see "Module supply while cranking").', ['feed:improve']);
+  }
   if (ws.energyJ[0]! < ENERGY_FLOOR_J) {
-    return result(id, title, 'caution', figures, `${why} While cranking it gives only ${fmt(ws.energyJ[0]! * 1000)} mJ.`, 'Expect hard starting; check the cranking supply and the ballast bypass.');
+    return result(id, title, 'caution', figures, `${why} While cranking it gives only ${fmt(ws.energyJ[0]! * 1000)} mJ.`, ctx.setup.ballast !== null && !ctx.setup.crankingBypass && ctx.p.kind !== 'capacitive-discharge' ? 'Expect hard starting; check the cranking supply, and consider a cranking bypass past the ballast.' : 'Expect hard starting; check the battery and the cranking supply.');
   }
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
@@ -60,11 +68,14 @@ export const voltageReserve: Rule = (ctx) => {
   if (baseline) figures.push(fig(`${baseline.label}, worst ratio`, baseline.worstRatio, ''));
   const why = 'The coil must offer more voltage than the gap needs at full load, with room for worn plugs, a damp lead and a wide gap: when it cannot, the engine misfires under load.';
   const where = worstIndex === 0 ? 'while cranking' : `at ${fmt(rpm, 0)} rpm`;
+  if (ws.noSpark[worstIndex] === 1) {
+    return result(id, title, 'fail', figures, `${why} ${where} the module's own supply is below what it needs to switch, so it offers no voltage at all.`, 'Give the module the supply it needs; no plug gap can make up for a module that does not switch.', ['feed:improve']);
+  }
   if (worstRatio < 1) {
-    return result(id, title, 'fail', figures, `${why} ${where} it offers ${fmt(ws.availableV[worstIndex]! / 1000)} kV where ${fmt(ws.requiredV[worstIndex]! / 1000)} kV is needed.`, 'Close the plug gap, or choose a coil and module with more output.');
+    return result(id, title, 'fail', figures, `${why} ${where} it offers ${fmt(ws.availableV[worstIndex]! / 1000)} kV where ${fmt(ws.requiredV[worstIndex]! / 1000)} kV is needed.`, 'Close the plug gap, or choose a coil and module with more output.', ['gap:close']);
   }
   if (worstRatio < margin) {
-    return result(id, title, 'caution', figures, `${why} ${where} the reserve ratio is ${fmt(worstRatio, 2)}, under the ${fmt(margin, 2)} margin.`, 'Close the plug gap a little (see the suggested gap) or choose a stronger coil.');
+    return result(id, title, 'caution', figures, `${why} ${where} the reserve ratio is ${fmt(worstRatio, 2)}, under the ${fmt(margin, 2)} margin.`, 'Close the plug gap a little (see the suggested gap) or choose a stronger coil.', ['gap:close']);
   }
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
@@ -131,8 +142,9 @@ export const offTime: Rule = (ctx) => {
   const figures = [fig('least off time / spark duration', worst, ''), fig('at rpm', grid.rpm[wi]!, 'rpm'), fig('off time there', ws.offS[wi]! * 1000, 'ms'), fig('spark duration there', ws.durationS[wi]! * 1000, 'ms')];
   const why = 'The coil can only be switched on again once the spark has burnt out; closing earlier cuts the spark short and wastes its energy.';
   if (p.kind === 'capacitive-discharge') return result(id, title, 'pass', figures, 'A CD spark is short and the coil is not charged between sparks.', 'Nothing to do.');
-  if (worst < OFF_TIME_FAIL_RATIO) return result(id, title, 'fail', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before a third of the spark has burnt.`, 'Choose a module with a lower maximum duty, or a coil with a shorter spark.');
-  if (worst < 1) return result(id, title, 'caution', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before the spark ends.`, 'Usually harmless near redline; a lower maximum duty would cure it.');
+  const shorter = shorterDwellWords(ctx);
+  if (worst < OFF_TIME_FAIL_RATIO) return result(id, title, 'fail', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before a third of the spark has burnt.`, `${shorter.fail}, or choose a coil with a shorter spark.`, ['dwell:shorter']);
+  if (worst < 1) return result(id, title, 'caution', figures, `${why} At ${fmt(grid.rpm[wi]!, 0)} rpm the switch closes before the spark ends.`, `Usually harmless near redline; ${shorter.caution} would cure it.`, ['dwell:shorter']);
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
 
@@ -148,19 +160,52 @@ export const plugGap: Rule = (ctx) => {
   const plug = setup.plug;
   if (plug) figures.push(fig('plug range from', plug.gapMinM * 1000, 'mm'), fig('plug range to', plug.gapMaxM * 1000, 'mm'));
   const why = 'A wider gap gives a bigger, surer flame kernel but needs more voltage; the widest gap the coil still fires with margin is the best compromise.';
-  if (plug && (setup.plugGapM < plug.gapMinM * 0.999 || setup.plugGapM > plug.gapMaxM * 1.001)) {
-    return result(id, title, 'caution', figures, `${why} The gap set is outside the plug's recommended range.`, 'Set the gap within the plug\'s range.');
+  if (plug && setup.plugGapM < plug.gapMinM * 0.999) {
+    return result(id, title, 'caution', figures, `${why} The gap set is closer than the plug's recommended range.`, `Open the gap to at least ${fmt(plug.gapMinM * 1000, 2)} mm, the plug's smallest.`, ['gap:widen']);
+  }
+  if (plug && setup.plugGapM > plug.gapMaxM * 1.001) {
+    return result(id, title, 'caution', figures, `${why} The gap set is wider than the plug's recommended range.`, `Close the gap to at most ${fmt(plug.gapMaxM * 1000, 2)} mm, the plug's largest.`, ['gap:close']);
   }
   if (!gap) return result(id, title, 'pass', figures, why, 'No gap suggestion was computed.');
   if (gap.suggestedGapM === null) {
-    return result(id, title, 'caution', figures, `${why} No gap from ${fmt(gap.searchedFromM * 1000, 2)} to ${fmt(gap.searchedToM * 1000, 2)} mm meets the ${fmt(gap.marginRatio, 2)} margin.`, 'Use the smallest recommended gap and look at the voltage reserve rule.');
+    if (anyNoSpark(ctx)) {
+      return result(id, title, 'caution', figures, `${why} Where the module's supply is too low for it to switch there is no spark at any gap.`, 'Give the module the supply it needs first; then look at the gap again.', ['feed:improve']);
+    }
+    return result(id, title, 'caution', figures, `${why} No gap from ${fmt(gap.searchedFromM * 1000, 2)} to ${fmt(gap.searchedToM * 1000, 2)} mm meets the ${fmt(gap.marginRatio, 2)} margin.`, 'Use the smallest recommended gap and look at the voltage reserve rule.', ['gap:close']);
   }
   figures.push(fig('suggested gap', gap.suggestedGapM * 1000, 'mm'));
   if (setup.plugGapM > gap.suggestedGapM * 1.001) {
-    return result(id, title, 'caution', figures, `${why} The gap set is wider than the ${fmt(gap.suggestedGapM * 1000, 2)} mm that keeps the margin.`, `Close the gap to ${fmt(gap.suggestedGapM * 1000, 2)} mm.`);
+    return result(id, title, 'caution', figures, `${why} The gap set is wider than the ${fmt(gap.suggestedGapM * 1000, 2)} mm that keeps the margin.`, `Close the gap to ${fmt(gap.suggestedGapM * 1000, 2)} mm.`, ['gap:close']);
   }
   return result(id, title, 'pass', figures, why, `The gap set keeps the margin; up to ${fmt(gap.suggestedGapM * 1000, 2)} mm would too.`);
 };
 
 /** The plug-gap rule advises only; it never fails. */
 export const plugGapFails: FailTest = () => false;
+
+/** Whether the module fails to switch anywhere from cranking to redline. */
+function anyNoSpark({ ws, redlineIndex }: RuleContext): boolean {
+  for (let i = 0; i <= redlineIndex; i++) if (ws.noSpark[i] === 1) return true;
+  return false;
+}
+
+/**
+ * A shorter dwell in the words of the system: points (and a points-triggered transistor unit, and
+ * a magneto's contact breaker) have a dwell angle set by the points gap, not a duty; a fixed-duty
+ * module has its fixed duty, a current-limited one its maximum duty.
+ */
+function shorterDwellWords({ p }: RuleContext): { fail: string; caution: string } {
+  if (p.kind === 'breakerless-fixed-duty') return { fail: 'Choose a module with a lower fixed duty', caution: 'a module with a lower fixed duty' };
+  if (p.kind === 'breakerless-current-limited') return { fail: 'Choose a module with a lower maximum duty', caution: 'a lower maximum duty' };
+  return { fail: 'Set the dwell at the low end of its range (a slightly wider points gap)', caution: 'a slightly smaller dwell (a slightly wider points gap)' };
+}
+
+/** What raises a falling spark energy, in the words of the system. */
+function lowEnergyAdvice({ p }: RuleContext): { text: string; intents: Intent[] } {
+  if (p.kind === 'capacitive-discharge') return { text: 'Choose a capacitive-discharge unit with a stronger charger or a larger capacitor.', intents: [] };
+  if (p.kind === 'magneto') return { text: 'Have the magneto\'s magnet recharged and its armature tested; a tired magneto is the usual cause.', intents: [] };
+  if (p.kind === 'points' || p.kind === 'transistor-points') {
+    return { text: 'Choose a coil of lower inductance or resistance, or set the dwell at the top of its range (a slightly closer points gap).', intents: ['coil-resistance:lower', 'dwell:longer'] };
+  }
+  return { text: 'Choose a coil of lower inductance or resistance, or a module that charges it longer.', intents: ['coil-resistance:lower', 'dwell:longer'] };
+}

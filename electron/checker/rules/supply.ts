@@ -1,7 +1,7 @@
 /**
  * Rules about the supply: what the module sees while cranking, earth polarity, 6 V systems.
  */
-import { fig, fmt, isModuleKind, result, type FailTest, type Rule } from './context.js';
+import { fig, fmt, isModuleKind, result, type FailTest, type Rule, type RuleContext } from './context.js';
 
 /** The module's own supply while the starter pulls the battery down, against its minimum. */
 export const crankingSupply: Rule = (ctx) => {
@@ -32,6 +32,40 @@ export const crankingSupplyFails: FailTest = (ctx) => {
   const m = ctx.setup.module;
   const v = ctx.p.moduleSupplyCrankingV;
   return isModuleKind(ctx) && m !== null && v !== null && v < m.supplyMinV;
+};
+
+/**
+ * The running supply against the module's maximum. A regulator holds the running (charging) supply
+ * at about 14 V on 12 V and 7.2 V on 6 V (the running-supply condition); a module whose maximum is
+ * below that is driven over its rating every time the engine runs (a 4.5-9 V six-volt unit on a
+ * 12 V car). Within 5 % of the maximum a tired or badly set regulator takes it over (common practice).
+ */
+export const SUPPLY_MAX_CAUTION_FRACTION = 0.95;
+
+/** The highest supply the module sees: the running supply with the coil off (no harness drop). */
+const runningSupplyOf = (ctx: RuleContext): number => ctx.p.runningSupplyV;
+
+export const moduleSupplyMax: Rule = (ctx) => {
+  const { setup, engine } = ctx;
+  const id = 'module-supply-max';
+  const title = 'Module supply against its maximum';
+  const m = setup.module;
+  const v = runningSupplyOf(ctx);
+  if (!isModuleKind(ctx) || !m) return result(id, title, 'pass', [fig('running supply', v, 'V')], 'Points and magnetos have no electronic supply limit.', 'Nothing to do.');
+  const figures = [fig('running (charging) supply', v, 'V'), fig('module maximum', m.supplyMaxV, 'V'), fig('caution from', SUPPLY_MAX_CAUTION_FRACTION * m.supplyMaxV, 'V')];
+  const why = 'A module run above its maximum supply overheats its regulator and switching transistor and can fail outright, usually on the road.';
+  if (v > m.supplyMaxV) {
+    return result(id, title, 'fail', figures, `${why} While the engine runs and the battery charges the supply is ${fmt(v, 2)} V, above the module's maximum of ${fmt(m.supplyMaxV, 2)} V.`, `Choose a module rated for this car's ${engine.systemVoltageV} V system (its maximum must be above ${fmt(v, 1)} V).`);
+  }
+  if (v > SUPPLY_MAX_CAUTION_FRACTION * m.supplyMaxV) {
+    return result(id, title, 'caution', figures, `${why} The running supply of ${fmt(v, 2)} V is within 5 % of the module's maximum of ${fmt(m.supplyMaxV, 2)} V.`, 'Have the charging voltage checked and set correctly, or choose a module with more headroom.');
+  }
+  return result(id, title, 'pass', figures, `${why} The running supply of ${fmt(v, 2)} V is well within the module's maximum of ${fmt(m.supplyMaxV, 2)} V.`, 'Nothing to do.');
+};
+
+export const moduleSupplyMaxFails: FailTest = (ctx) => {
+  const m = ctx.setup.module;
+  return isModuleKind(ctx) && m !== null && runningSupplyOf(ctx) > m.supplyMaxV;
 };
 
 /** A module built for negative earth will not work (or will be destroyed) on a positive-earth car. */
@@ -71,7 +105,7 @@ export const sixVolt: Rule = (ctx) => {
     return result(id, title, 'pass', figures, 'The parts suit a 6 V system.', 'Nothing to do.');
   }
   if (coil.ratedVoltageV === 6 && setup.ballast === null && p.kind !== 'breakerless-current-limited' && p.kind !== 'capacitive-discharge') {
-    return result(id, title, 'caution', figures, 'A 6 V coil on 12 V carries about twice its design current unless something limits it.', 'Fit a ballast or a current-limited module, or choose a 12 V coil.');
+    return result(id, title, 'caution', figures, 'A 6 V coil on 12 V carries about twice its design current unless something limits it.', 'Fit a ballast or a current-limited module, or choose a 12 V coil.', ['ballast:add']);
   }
   if (coil.ratedVoltageV === 6 && setup.ballast === null && p.kind === 'breakerless-current-limited') {
     // The module's limiter is then the only thing between the coil and twice its design current:

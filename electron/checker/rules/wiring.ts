@@ -12,14 +12,14 @@ export const condenser: Rule = (ctx) => {
   const figures = [fig('condenser', uf, 'uF')];
   if (p.kind === 'points' || p.kind === 'magneto') {
     const why = 'The condenser across the points stops them arcing as they open; without it they burn in hours and the spark is weak.';
-    if (setup.condenserF === null) return result(id, title, 'fail', figures, why, 'Fit a condenser across the points (about 0.2 uF).');
+    if (setup.condenserF === null) return result(id, title, 'fail', figures, why, 'Fit a condenser across the points (about 0.2 uF).', ['condenser:fit']);
     // Typical points condensers are 0.18 to 0.25 uF (from memory); allow some spread.
     if (uf < 0.12 || uf > 0.4) return result(id, title, 'caution', figures, `${why} This one is outside the usual 0.18 to 0.25 uF.`, 'Fit a condenser of about 0.2 uF.');
     return result(id, title, 'pass', figures, why, 'Nothing to do.');
   }
   const why = 'A module switches the coil itself; a condenser left across the coil negative slows the rise (its charge reflects into the secondary as C/n^2) and can upset the module.';
   if (setup.condenserF !== null) {
-    return result(id, title, p.kind === 'capacitive-discharge' ? 'fail' : 'caution', figures, p.kind === 'capacitive-discharge' ? 'A condenser across a CD coil primary swallows the discharge pulse.' : why, 'Disconnect the condenser lead from the coil negative (or remove the condenser).');
+    return result(id, title, p.kind === 'capacitive-discharge' ? 'fail' : 'caution', figures, p.kind === 'capacitive-discharge' ? 'A condenser across a CD coil primary swallows the discharge pulse.' : why, 'Disconnect the condenser lead from the coil negative (or remove the condenser).', ['condenser:remove']);
   }
   return result(id, title, 'pass', figures, why, 'Make sure the old condenser is disconnected from the coil negative.');
 };

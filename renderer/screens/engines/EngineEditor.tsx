@@ -16,7 +16,8 @@ import { AdvanceCurveTable } from './AdvanceCurveTable.js';
 import { useDeleteEngine } from './delete-engine.js';
 import { blankForm, engineToForm, formFingerprint, formToInput, type EngineForm } from './form-model.js';
 import { ElectricsSection, GeometrySection, IdentitySection, PointsSection, SpeedsSection } from './sections-engine.js';
-import { ConditionsSection, ExistingSection } from './sections-existing.js';
+import { ConditionsSection } from './sections-conditions.js';
+import { ExistingSection } from './sections-existing.js';
 
 type Props = {
   id: number | null;

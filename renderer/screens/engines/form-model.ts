@@ -4,7 +4,7 @@
  * `EngineInput` and checks it with the same zod schema the store uses, returning messages keyed
  * by the schema's paths ("existing.plugGapMm", "advanceCurve.2.rpm").
  */
-import { engineInput, fieldMessages, type Engine, type EngineInput } from '../../../db/schema.js';
+import { conditionDescriptors, conditionKeys, engineInput, fieldMessages, toStored, toTyped, type CoilWiringChoice, type ConditionKey, type Engine, type EngineInput } from '../../../db/schema.js';
 import { numberToText, parseNumberText, parseOptionalNumberText } from '../../app/numbers.js';
 import { gapFromMm, gapPrint, type GapValue } from '../../app/gaps.js';
 import type { GapUnit } from '../../app/units.js';
@@ -40,6 +40,7 @@ export type EngineForm = {
     ballast: EngineInput['existing']['ballast'];
     ballastPartId: string;
     crankingBypass: boolean;
+    coilWiring: CoilWiringChoice;
     condenserUf: string;
     tachPartId: string;
     leadsPartId: string;
@@ -51,8 +52,8 @@ export type EngineForm = {
   conditions: Record<ConditionKey, string>;
 };
 
-export const conditionKeys = ['runningSupplyV', 'crankingSupplyV', 'harnessResistanceOhm', 'ambientC', 'underBonnetC', 'volumetricEfficiency'] as const;
-export type ConditionKey = (typeof conditionKeys)[number];
+/** Every working condition as typed (in the unit its descriptor shows: kPa, pF, ms ...); blank = the default. */
+const blankConditions = (): Record<ConditionKey, string> => Object.fromEntries(conditionKeys.map((k) => [k, ''])) as Record<ConditionKey, string>;
 
 let rowKey = 1;
 export const nextRowKey = (): number => rowKey++;
@@ -94,6 +95,7 @@ export function blankForm(unit: GapUnit): EngineForm {
       ballast: 'none',
       ballastPartId: '',
       crankingBypass: false,
+      coilWiring: 'as-marked-for-earth',
       condenserUf: '0.22',
       tachPartId: '',
       leadsPartId: '',
@@ -102,7 +104,7 @@ export function blankForm(unit: GapUnit): EngineForm {
       magnetoRatedCurrentA: '',
       magnetoFullOutputRpm: '',
     },
-    conditions: { runningSupplyV: '', crankingSupplyV: '', harnessResistanceOhm: '', ambientC: '', underBonnetC: '', volumetricEfficiency: '' },
+    conditions: blankConditions(),
   };
 }
 
@@ -138,6 +140,7 @@ export function engineToForm(e: Engine, unit: GapUnit): EngineForm {
       ballast: e.existing.ballast,
       ballastPartId: idText(e.existing.ballastPartId),
       crankingBypass: e.existing.crankingBypass,
+      coilWiring: e.existing.coilWiring ?? 'as-marked-for-earth',
       condenserUf: n(e.existing.condenserUf),
       tachPartId: idText(e.existing.tachPartId),
       leadsPartId: idText(e.existing.leadsPartId),
@@ -146,14 +149,12 @@ export function engineToForm(e: Engine, unit: GapUnit): EngineForm {
       magnetoRatedCurrentA: n(e.existing.magnetoRatedCurrentA),
       magnetoFullOutputRpm: n(e.existing.magnetoFullOutputRpm),
     },
-    conditions: {
-      runningSupplyV: n(c.runningSupplyV),
-      crankingSupplyV: n(c.crankingSupplyV),
-      harnessResistanceOhm: n(c.harnessResistanceOhm),
-      ambientC: n(c.ambientC),
-      underBonnetC: n(c.underBonnetC),
-      volumetricEfficiency: n(c.volumetricEfficiency),
-    },
+    conditions: Object.fromEntries(
+      conditionDescriptors.map((d) => {
+        const v = c[d.key];
+        return [d.key, v === undefined ? '' : n(toTyped(d, v))];
+      }),
+    ) as Record<ConditionKey, string>,
   };
 }
 
@@ -175,12 +176,7 @@ export const numberLabels: Record<string, string> = {
   'existing.plugGapMm': 'Plug gap',
   'existing.magnetoRatedCurrentA': 'Magneto rated current',
   'existing.magnetoFullOutputRpm': 'Magneto full-output rpm',
-  'conditions.runningSupplyV': 'Running supply',
-  'conditions.crankingSupplyV': 'Cranking supply',
-  'conditions.harnessResistanceOhm': 'Harness resistance',
-  'conditions.ambientC': 'Air temperature',
-  'conditions.underBonnetC': 'Under-bonnet temperature',
-  'conditions.volumetricEfficiency': 'Volumetric efficiency',
+  ...Object.fromEntries(conditionDescriptors.map((d) => [`conditions.${d.key}`, d.label])),
 };
 
 export type FormCheck = { ok: true; input: EngineInput } | { ok: false; errors: Record<string, string> };
@@ -209,9 +205,9 @@ export function formToInput(f: EngineForm): FormCheck {
   const partId = (v: string): number | null => (v === '' ? null : Number(v));
   const magneto = f.existing.trigger === 'magneto';
   const conditions: Record<string, number> = {};
-  for (const k of conditionKeys) {
-    const v = opt(`conditions.${k}`, f.conditions[k]);
-    if (v !== null) conditions[k] = v;
+  for (const d of conditionDescriptors) {
+    const v = opt(`conditions.${d.key}`, f.conditions[d.key]);
+    if (v !== null) conditions[d.key] = toStored(d, v);
   }
   const candidate = {
     name: f.name,
@@ -245,6 +241,7 @@ export function formToInput(f: EngineForm): FormCheck {
       ballast: f.existing.ballast,
       ballastPartId: f.existing.ballast === 'none' ? null : partId(f.existing.ballastPartId),
       crankingBypass: f.existing.ballast === 'none' ? false : f.existing.crankingBypass,
+      coilWiring: magneto ? 'as-marked-for-earth' : f.existing.coilWiring,
       condenserUf: opt('existing.condenserUf', f.existing.condenserUf),
       tachPartId: partId(f.existing.tachPartId),
       leadsPartId: partId(f.existing.leadsPartId),
@@ -259,6 +256,10 @@ export function formToInput(f: EngineForm): FormCheck {
   if (parsed.success && Object.keys(errors).length === 0) return { ok: true, input: parsed.data };
   // Our own "type a number" messages win over zod's, which only sees the NaN we put in their place.
   const fromSchema = parsed.success ? {} : fieldMessages(parsed.error);
+  // A condition's range names the plan file's SI key too; beside a box typed in kPa or pF that is noise.
+  for (const [path, message] of Object.entries(fromSchema)) {
+    if (path.startsWith('conditions.')) fromSchema[path] = message.replace(/ \(in the file, [^)]*\)/, '');
+  }
   return { ok: false, errors: { ...fromSchema, ...errors } };
 }
 

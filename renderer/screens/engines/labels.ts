@@ -32,3 +32,16 @@ export const ballastChoices = [
 
 /** Short form for the list's Earth column. */
 export const earthWords = (e: string): string => (e === 'positive' ? 'Positive' : e === 'negative' ? 'Negative' : e);
+
+/**
+ * Which coil terminal goes to the supply side, in the words of the car's earth: on negative earth
+ * the terminal marked + (SW, 15) takes the feed, on positive earth the one marked - (CB, 1).
+ */
+export function coilWiringChoices(earth: 'negative' | 'positive'): ReadonlyArray<{ value: 'as-marked-for-earth' | 'reversed'; label: string }> {
+  const marked = earth === 'negative' ? '+ (SW, 15)' : '- (CB, 1)';
+  const other = earth === 'negative' ? '- (CB, 1)' : '+ (SW, 15)';
+  return [
+    { value: 'as-marked-for-earth', label: `As marked for ${earth} earth: ${marked} to the feed` },
+    { value: 'reversed', label: `The other way round: ${other} to the feed` },
+  ];
+}

@@ -1,15 +1,15 @@
 /**
- * The ignition the engine has today, which every candidate combination is weighed against, and
- * the optional working conditions that override the defaults.
+ * The ignition the engine has today, which every candidate combination is weighed against. (The
+ * working conditions are in sections-conditions.tsx.)
  */
-import { useContext, useEffect, useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import type { Part, PartKind } from '../../../db/schema.js';
-import { CheckField, FieldErrorsContext, PartPicker, SelectField, TextField } from '../../app/fields.js';
+import { CheckField, PartPicker, SelectField, TextField } from '../../app/fields.js';
 import { gapFromText } from '../../app/gaps.js';
 import { Group } from '../../app/Group.js';
 import { unitLabel, type GapUnit } from '../../app/units.js';
-import { conditionKeys, type ConditionKey, type EngineForm } from './form-model.js';
-import { ballastChoices, triggerChoices } from './labels.js';
+import type { EngineForm } from './form-model.js';
+import { ballastChoices, coilWiringChoices, triggerChoices } from './labels.js';
 import type { Update } from './sections-engine.js';
 
 type Existing = EngineForm['existing'];
@@ -25,6 +25,16 @@ export function ExistingSection({ form, update, unit, parts }: Props): ReactNode
     <Group title="The ignition fitted now" id="g-existing" full>
       <SelectField path="existing.trigger" label="Fitted ignition" value={x.trigger} choices={triggerChoices} onChange={(v) => setExisting(update, { trigger: v })} />
       <PartPicker path="existing.coilPartId" label="Coil" value={x.coilPartId} parts={parts.coil} onChange={text('coilPartId')} />
+      {x.trigger !== 'magneto' ? (
+        <SelectField
+          path="existing.coilWiring"
+          label="Coil terminal on the supply side"
+          value={x.coilWiring}
+          choices={coilWiringChoices(form.earthPolarity)}
+          onChange={(v) => setExisting(update, { coilWiring: v })}
+          hint="Wired the other way round, the plug fires the wrong way and needs about 10 % more voltage"
+        />
+      ) : null}
       <SelectField path="existing.ballast" label="Ballast" value={x.ballast} choices={ballastChoices} onChange={(v) => setExisting(update, { ballast: v })} />
       {x.ballast !== 'none' ? (
         <>
@@ -55,41 +65,5 @@ export function ExistingSection({ form, update, unit, parts }: Props): ReactNode
         </>
       ) : null}
     </Group>
-  );
-}
-
-const conditionLabels: Record<ConditionKey, string> = {
-  runningSupplyV: 'Supply while running (V)',
-  crankingSupplyV: 'Supply while cranking (V)',
-  harnessResistanceOhm: 'Loom resistance, switch to coil (Ω)',
-  ambientC: 'Air temperature (°C)',
-  underBonnetC: 'Under-bonnet temperature (°C)',
-  volumetricEfficiency: 'Volumetric efficiency (0.3 to 1.3)',
-};
-
-export function ConditionsSection({ form, update }: { form: EngineForm; update: Update }): ReactNode {
-  const ctx = useContext(FieldErrorsContext);
-  const [open, setOpen] = useState(() => conditionKeys.some((k) => form.conditions[k].trim() !== ''));
-  const hasMessage = conditionKeys.some((k) => ctx.message(`conditions.${k}`) !== undefined);
-  // A message inside must never be out of sight: open the panel when one appears.
-  useEffect(() => {
-    if (hasMessage) setOpen(true);
-  }, [hasMessage]);
-  return (
-    <details className="group conditions" open={open} onToggle={(e) => setOpen(e.currentTarget.open)}>
-      <summary>Working conditions (optional: blank boxes use the usual defaults)</summary>
-      <div className="group-fields">
-        {conditionKeys.map((k) => (
-          <TextField
-            key={k}
-            path={`conditions.${k}`}
-            label={conditionLabels[k]}
-            numeric
-            value={form.conditions[k]}
-            onChange={(v) => update((f) => ({ ...f, conditions: { ...f.conditions, [k]: v } }))}
-          />
-        ))}
-      </div>
-    </details>
   );
 }

@@ -25,6 +25,7 @@ export const fieldSpecs: Record<string, FieldSpec> = {
   turnsRatio: { label: 'Turns ratio', unit: '' },
   secondaryInductanceH: { label: 'Secondary inductance', unit: 'H' },
   maxDissipationW: { label: 'Maximum dissipation', unit: 'W' },
+  ratedSecondaryKv: { label: 'Rated secondary voltage', unit: 'kV' },
   coldResistanceOhm: { label: 'Cold resistance', unit: 'Ω' },
   thermalResistanceKPerW: { label: 'Thermal resistance', unit: 'K/W' },
   supplyMinV: { label: 'Lowest supply', unit: 'V' },

@@ -24,6 +24,7 @@ export type PartForm = {
     forBallast: boolean;
     ratedVoltageV: '6' | '12';
     maxDissipationW: string;
+    ratedSecondaryKv: string;
   };
   ballast: { ballastType: Ballast['ballastType']; coldResistanceOhm: string; thermalResistanceKPerW: string };
   module: {
@@ -59,7 +60,7 @@ export function blankPartForm(kind: PartKind): PartForm {
     kind,
     name: '',
     notes: '',
-    coil: { primaryResistanceOhm20C: '', primaryInductanceH: '', secondaryResistanceOhm: '', turnsRatio: '', secondaryInductanceH: '', forBallast: false, ratedVoltageV: '12', maxDissipationW: '' },
+    coil: { primaryResistanceOhm20C: '', primaryInductanceH: '', secondaryResistanceOhm: '', turnsRatio: '', secondaryInductanceH: '', forBallast: false, ratedVoltageV: '12', maxDissipationW: '', ratedSecondaryKv: '' },
     ballast: { ballastType: 'ceramic', coldResistanceOhm: '', thermalResistanceKPerW: '' },
     module: {
       moduleType: 'breakerless-current-limited',
@@ -107,6 +108,7 @@ export function partToForm(p: Part, unit: GapUnit): PartForm {
         forBallast: p.forBallast,
         ratedVoltageV: p.ratedVoltageV === 6 ? '6' : '12',
         maxDissipationW: shown('maxDissipationW', p.maxDissipationW),
+        ratedSecondaryKv: shown('ratedSecondaryKv', p.ratedSecondaryKv ?? null),
       };
       break;
     case 'ballast':
@@ -194,6 +196,7 @@ export function formToInput(f: PartForm, unit: GapUnit): FormCheck {
         forBallast: c.forBallast,
         ratedVoltageV: c.ratedVoltageV === '6' ? 6 : 12,
         maxDissipationW: opt('maxDissipationW', c.maxDissipationW),
+        ratedSecondaryKv: opt('ratedSecondaryKv', c.ratedSecondaryKv),
       };
       break;
     }

@@ -51,6 +51,14 @@ export function CoilSections({ form, update }: Props): ReactNode {
         <TextField path="secondaryResistanceOhm" label="Secondary resistance (Ω)" numeric value={c.secondaryResistanceOhm} onChange={set('secondaryResistanceOhm')} hint="Read from + to the HT tower" />
         <TextField path="turnsRatio" label="Turns ratio (to 1)" numeric value={c.turnsRatio} onChange={set('turnsRatio')} hint="Give this or the secondary inductance" />
         <TextField path="secondaryInductanceH" label="Secondary inductance (H, optional)" numeric value={c.secondaryInductanceH} onChange={set('secondaryInductanceH')} hint="Henries; blank if the turns ratio is given" />
+        <TextField
+          path="ratedSecondaryKv"
+          label="Rated secondary voltage (kV, optional)"
+          numeric
+          value={c.ratedSecondaryKv}
+          onChange={set('ratedSecondaryKv')}
+          hint="The most the coil's insulation is made for; blank uses the default for its kind (from memory)"
+        />
       </Group>
     </>
   );

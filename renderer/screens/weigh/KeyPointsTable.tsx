@@ -42,6 +42,19 @@ export function KeyPointsTable({ setups, margin }: { setups: readonly ShownSetup
               {sp.key === 'cranking' ? ' (on the cranking supply)' : ''}
             </th>
           </tr>
+          {setups.some((s) => s.keyPoints[sp.key].noSparkReason !== null) ? (
+            <tr className="no-spark-row">
+              <th scope="row">Spark</th>
+              {setups.map((s, i) => {
+                const why = s.keyPoints[sp.key].noSparkReason;
+                return (
+                  <td key={i} className={why ? 'no-spark' : undefined} data-testid={why ? `no-spark-${sp.key}-${i}` : undefined}>
+                    {why ?? 'Sparks'}
+                  </td>
+                );
+              })}
+            </tr>
+          ) : null}
           {rows.map((r) => (
             <tr key={r.label}>
               <th scope="row">{r.label}</th>

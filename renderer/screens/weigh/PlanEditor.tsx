@@ -14,6 +14,7 @@ import { Notice } from '../../app/Notice.js';
 import { unitLabel, useGapUnit } from '../../app/units.js';
 import { formToPlanInput, planFingerprint, type PlanForm } from './plan-form.js';
 import { feedChoices } from './words.js';
+import { coilWiringChoices } from '../engines/labels.js';
 
 type Props = {
   engine: Engine;
@@ -30,7 +31,7 @@ type Props = {
 };
 
 /** In the order the fields appear, so focus lands on the first one a person would read. */
-const fieldOrder = ['name', 'moduleId', 'coilId', 'ballastId', 'crankingBypass', 'moduleFeed', 'tachId', 'leadsId', 'plugId', 'plugGapMm', 'notes'];
+const fieldOrder = ['name', 'moduleId', 'coilId', 'ballastId', 'crankingBypass', 'moduleFeed', 'coilWiring', 'tachId', 'leadsId', 'plugId', 'plugGapMm', 'notes'];
 
 const nameOf = (parts: readonly Part[], id: number | null): string | null => (id === null ? null : (parts.find((p) => p.id === id)?.name ?? `part no. ${id}`));
 
@@ -66,7 +67,12 @@ export function PlanEditor({ engine, parts, initial, planId, status, startsDirty
     saveForm(e, check, {
       what: 'this plan',
       serverPrefix: 'plan',
-      send: (plan) => (planId === null ? call('plans.create', { plan }) : call('plans.update', { id: planId, plan })),
+      // An edit leaves the status out: it may have moved on (weighed, wired) since the editor opened.
+      send: (plan) => {
+        if (planId === null) return call('plans.create', { plan });
+        const { status: _status, ...fields } = plan;
+        return call('plans.update', { id: planId, plan: fields });
+      },
       problem: setProblem,
       saved: (plan) => {
         setProblem(null);
@@ -133,6 +139,14 @@ export function PlanEditor({ engine, parts, initial, planId, status, startsDirty
               />
             ) : null}
             {form.moduleId !== '' ? <FeedChoice value={form.moduleFeed} onChange={(v) => set({ moduleFeed: v })} noBallast={form.ballastId === ''} /> : null}
+            <SelectField
+              path="coilWiring"
+              label="Coil terminal on the supply side"
+              value={form.coilWiring}
+              choices={coilWiringChoices(engine.earthPolarity)}
+              onChange={(v) => set({ coilWiring: v })}
+              hint="Wired the other way round, the plug fires the wrong way and needs about 10 % more voltage"
+            />
             <p className="hint wide">“Keep” leaves the part as the engine has it today.</p>
             <SelectField path="tachId" label="Rev counter" value={form.tachId} choices={choicesOf(parts.tach, keep('tach', existing.tachPartId), form.tachId)} onChange={text('tachId')} />
             <SelectField path="leadsId" label="HT leads" value={form.leadsId} choices={choicesOf(parts.leads, keep('leads', existing.leadsPartId), form.leadsId)} onChange={text('leadsId')} />

@@ -1,4 +1,4 @@
-/** One card per setup: its verdict, how many checks came out which way, the margin and the gap. */
+/** One card per setup: its verdict, how many checks came out which way, what to do, the margin and the gap. */
 import type { ReactNode } from 'react';
 import type { ShownSetup } from '../../../electron/ipc/channels.js';
 import { styleFor } from '../../charts/palette.js';
@@ -44,6 +44,18 @@ export function SetupCards({ setups, margin }: { setups: readonly ShownSetup[]; 
             <p className="card-line">
               Plug gap {gapWithUnit(s.plugGapMm, unit)}; largest that keeps the margin: {s.suggestedGapMm === null ? 'none found' : gapWithUnit(s.suggestedGapMm, unit)}.
             </p>
+            {s.actions.length > 0 ? (
+              <div className="card-actions" data-testid={`actions-${i}`}>
+                <p className="card-line">
+                  <strong>What to do, in this order:</strong>
+                </p>
+                <ol className="card-action-list">
+                  {s.actions.map((a) => (
+                    <li key={a}>{a}</li>
+                  ))}
+                </ol>
+              </div>
+            ) : null}
             {s.measured.length > 0 ? (
               <p className="card-line measured-line">
                 <span className="measured-tag">Measured</span>{' '}

@@ -44,8 +44,20 @@ export function WeighCharts({ setups, margin }: { setups: readonly ShownSetup[];
   const highest = x.map((_, i) => Math.max(...usable.map((s) => s.series.requiredKv[i] ?? 0)));
   const band = { label: `Margin: ${number(margin, 2)} × what the plug needs (available should stay above the band)`, lower: highest, upper: highest.map((v) => v * margin), from };
 
+  // Where a module does not switch the lines drop to 0: say why under the charts.
+  const noSpark = usable.flatMap((s) => (s.series.noSparkNote ? [`${label(s)}: ${s.series.noSparkNote}`] : []));
+
   return (
     <div className="charts" data-testid="charts">
+      {noSpark.length > 0 ? (
+        <ul className="no-spark-notes" data-testid="no-spark-notes">
+          {noSpark.map((t) => (
+            <li key={t}>
+              <strong>No spark:</strong> {t}
+            </li>
+          ))}
+        </ul>
+      ) : null}
       <LineChart
         title="Energy stored per spark"
         description="Across the rev range, from cranking speed to 10 % past redline. The lone marks at the far left are cranking, on the cranking supply."

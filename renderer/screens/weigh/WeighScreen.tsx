@@ -23,6 +23,7 @@ import { MAX_TICKED, PlanList } from './PlanList.js';
 import { RuleDetails, RuleOverview } from './RuleDetails.js';
 import { SetupCards } from './SetupCards.js';
 import { ShelfList } from './ShelfList.js';
+import { AmbientField } from './AmbientField.js';
 import { useComparison, useEngine, useEnginesAndParts, useShelfSearch } from './use-weigh-data.js';
 import { WeighCharts } from './WeighCharts.js';
 import { todayText } from '../../app/today.js';
@@ -49,7 +50,8 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
 
   const ready = plansFor === engineId && ticked.for === engineId;
   const comparison = useComparison(engineId, ticked.ids, ready, plansVersion);
-  const search = useShelfSearch(engineId, 0);
+  const [shelfVersion, setShelfVersion] = useState(0);
+  const search = useShelfSearch(engineId, shelfVersion);
   useLeaveGuard(editing.dirty, editing.name ? `The plan “${editing.name}”` : 'The new plan');
 
   // Without a remembered engine, or with one that is gone, start on the first in the list.
@@ -195,6 +197,14 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
               <h2 id="compare-title">How they compare</h2>
               {answer ? <PrintBar what="The comparison" pageSize={pageSize} onPageSize={setPageSize} onResult={(kind, text) => setPrinted({ kind, text })} /> : null}
             </div>
+            <AmbientField
+              key={e.id}
+              engine={e}
+              onSaved={() => {
+                setPlansVersion((v) => v + 1);
+                setShelfVersion((v) => v + 1);
+              }}
+            />
             {printed ? (
               <Notice kind={printed.kind} onDismiss={() => setPrinted(null)} testId="weigh-printed">
                 {printed.text}

@@ -17,6 +17,7 @@ export type PlanForm = {
   ballastId: string;
   crankingBypass: boolean;
   moduleFeed: PlanInput['moduleFeed'];
+  coilWiring: NonNullable<PlanInput['coilWiring']>;
   tachId: string;
   leadsId: string;
   plugId: string;
@@ -36,6 +37,7 @@ export function blankPlanForm(engine: Engine, unit: GapUnit): PlanForm {
     ballastId: '',
     crankingBypass: false,
     moduleFeed: 'switched-15',
+    coilWiring: 'as-marked-for-earth',
     tachId: '',
     leadsId: '',
     plugId: '',
@@ -52,6 +54,7 @@ export function planToForm(p: Plan, unit: GapUnit): PlanForm {
     ballastId: idText(p.ballastId),
     crankingBypass: p.crankingBypass,
     moduleFeed: p.moduleFeed,
+    coilWiring: p.coilWiring ?? 'as-marked-for-earth',
     tachId: idText(p.tachId),
     leadsId: idText(p.leadsId),
     plugId: idText(p.plugId),
@@ -59,7 +62,7 @@ export function planToForm(p: Plan, unit: GapUnit): PlanForm {
   };
 }
 
-/** "Make this a plan": the suggestion's module, coil, ballast and bypass, the rest as fitted now. */
+/** "Make this a plan": the suggestion's module, coil, ballast, bypass and any shelf tach, leads or plugs, the rest as fitted now. */
 export function suggestionToForm(s: ShelfSuggestion, engine: Engine, unit: GapUnit): PlanForm {
   return {
     ...blankPlanForm(engine, unit),
@@ -69,6 +72,9 @@ export function suggestionToForm(s: ShelfSuggestion, engine: Engine, unit: GapUn
     coilId: String(s.coilId),
     ballastId: idText(s.ballastId),
     crankingBypass: s.ballastId !== null && s.crankingBypass,
+    tachId: idText(s.tachId),
+    leadsId: idText(s.leadsId),
+    plugId: idText(s.plugId),
     plugGap: gapFromMm(s.setup.plugGapMm, unit),
   };
 }
@@ -90,6 +96,7 @@ export function formToPlanInput(f: PlanForm, engineId: number, status: PlanStatu
     // A bypass only means something with a ballast to bypass.
     crankingBypass: f.ballastId !== '' && f.crankingBypass,
     moduleFeed: f.moduleFeed,
+    coilWiring: f.coilWiring,
     tachId: idOf(f.tachId),
     leadsId: idOf(f.leadsId),
     plugId: idOf(f.plugId),
