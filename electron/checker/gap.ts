@@ -44,6 +44,17 @@ export function gapMeetsMargin(grid: RpmGrid, availableV: Float64Array, lastInde
   return Number.isFinite(worst) && worst >= margin;
 }
 
+/**
+ * The gap at which one point's reserve under the empirical law falls to the margin: 24.22 x +
+ * 6.08 sqrt(x) = available / (1000 margin polarity) solved for sqrt(x), x the reduced gap in cm
+ * (NaN where it has no positive answer). Only a first guess: the bisection's tests decide.
+ */
+function edgeGapM(densityFactor: number, availableV: number, margin: number, polarityFactor: number): number {
+  const v = availableV / (1000 * margin * polarityFactor);
+  const s = (-6.08 + Math.sqrt(6.08 * 6.08 + 4 * 24.22 * v)) / (2 * 24.22);
+  return densityFactor > 0 && s > 0 ? (s * s) / densityFactor / 100 : NaN;
+}
+
 /** Search range when the plug gives none: 0.3 to 2.0 mm (common practice). */
 export const DEFAULT_GAP_RANGE_M: readonly [number, number] = [0.3e-3, 2.0e-3];
 
@@ -59,6 +70,19 @@ export function suggestGap(grid: RpmGrid, availableV: Float64Array, lastIndex: n
   const base = { searchedFromM: lo, searchedToM: hi, marginRatio: margin };
   if (!meets(lo)) return { suggestedGapM: null, ...base };
   if (meets(hi)) return { suggestedGapM: hi, ...base };
+  // The empirical law gives a required voltage that never falls as the gap grows, in floating
+  // point too (sums and products of non-negative terms, a correctly rounded sqrt), so every gap
+  // that meets the margin lies below every gap that does not, and any pair (one that meets, one
+  // that does not) rounding down to the same 0.01 mm gives the answer the halving below would.
+  // Try first the pair just either side of the edge the worst rpm alone would set.
+  if (!paschen && margin > 0 && polarityFactor > 0 && worstIndex >= 0 && worstIndex <= lastIndex) {
+    const edge = edgeGapM(grid.densityFactor[worstIndex]!, availableV[worstIndex]!, margin, polarityFactor);
+    if (edge > lo && edge < hi) {
+      const a = Math.max(lo, edge * (1 - 1e-9));
+      const b = Math.min(hi, edge * (1 + 1e-9));
+      if (Math.floor(a * 1e5) === Math.floor(b * 1e5) && meets(a) && !meets(b)) return { suggestedGapM: Math.max(lo, Math.floor(a * 1e5) / 1e5), ...base };
+    }
+  }
   let a = lo;
   let b = hi;
   // The answer is rounded down to 0.01 mm: once both ends round down to the same 0.01 mm the

@@ -158,6 +158,38 @@ export function sweepRpm(engine: EngineSpec, n: number): Float64Array {
   return out;
 }
 
+/**
+ * Everything `buildGrids` reads, as a flat list of values: the point count, the engine's speeds,
+ * cylinders, cycle, timing, geometry and charging, the charge conditions, and the advance curve.
+ */
+function gridInputs(engine: EngineSpec, c: ResolvedConditions, n: number): unknown[] {
+  const key: unknown[] = [
+    n, engine.crankingRpm, engine.idleRpm, engine.redlineRpm, engine.cylinders, engine.cycle, engine.staticTimingDegBtdc,
+    engine.conRodM, engine.strokeM, engine.compressionRatio, engine.charging,
+    c.volumetricEfficiency.value, c.ambientPressurePa.value, c.inletChargeC.value, c.ambientC.value, c.polytropicIndex.value, c.dynamoCutInRpm.value,
+    engine.advanceCurve.length,
+  ];
+  for (const row of engine.advanceCurve) key.push(row.rpm, row.advanceDeg);
+  return key;
+}
+
+/** The grids built last and what they were built from (every check of one engine asks for the same grids). */
+let lastGrids: { inputs: unknown[]; grids: EngineGrids } | null = null;
+
+/**
+ * `buildGrids`, answered from the last call when every value it reads is the same (`Object.is`):
+ * a check, a comparison and a search on one engine and one set of conditions share one set of
+ * grids. Grids are only ever read once built, so sharing them changes nothing.
+ */
+export function gridsFor(engine: EngineSpec, c: ResolvedConditions, rpmPoints: number): EngineGrids {
+  const inputs = gridInputs(engine, c, rpmPointCount(rpmPoints));
+  const last = lastGrids;
+  if (last && last.inputs.length === inputs.length && last.inputs.every((v, i) => Object.is(v, inputs[i]))) return last.grids;
+  const grids = buildGrids(engine, c, rpmPoints);
+  lastGrids = { inputs, grids };
+  return grids;
+}
+
 export function buildGrids(engine: EngineSpec, c: ResolvedConditions, rpmPoints: number): EngineGrids {
   const n = rpmPointCount(rpmPoints);
   const n1 = c.polytropicIndex.value;

@@ -40,7 +40,13 @@ export function checkSetup(engine: EngineSpec, setup: SetupSpec, conditions?: Co
   const s = createSession(engine, conditions, options);
   let base: Baseline | null = null;
   if (baseline && baseline.points.length === s.grids.sweep.n) {
-    base = { label: baseline.label, energyJ: Float64Array.from(baseline.points, (p) => p.storedEnergyJ), worstRatio: baseline.worstReserveRatio };
+    base = {
+      label: baseline.label,
+      energyJ: Float64Array.from(baseline.points, (p) => p.storedEnergyJ),
+      sparkEnergyJ: Float64Array.from(baseline.points, (p) => p.sparkEnergyJ),
+      durationS: Float64Array.from(baseline.points, (p) => p.sparkDurationS),
+      worstRatio: baseline.worstReserveRatio,
+    };
   }
   return toReport(s, analyse(s, setup, base, !(options?.skipGapSuggestion ?? false)));
 }

@@ -2,14 +2,14 @@
  * A check session: one engine under one set of conditions, with its rpm grids built once. Each
  * setup is then prepared, swept and judged against it.
  */
-import { buildGrids, type EngineGrids } from './grid.js';
+import { gridsFor, type EngineGrids } from './grid.js';
 import { keyOnReport } from './keyon.js';
 import { prepareSetup, type PreparedSetup } from './prepare.js';
 import { resolveConditions } from './conditions.js';
 import { createWorkspace, evaluateGrid, requiredInto, type Workspace } from './sweep.js';
 import { suggestGap } from './gap.js';
 import { runRules, worstVerdict } from './rules/index.js';
-import type { Baseline, RuleContext } from './rules/context.js';
+import { baselineFrom, type Baseline, type RuleContext } from './rules/context.js';
 import type { BreakdownModel, CheckOptions, ConditionInputs, EngineSpec, KeyOnReport, PlugGapSuggestion, ResolvedConditions, RuleResult, SetupSpec, Verdict } from './types.js';
 
 export interface Session {
@@ -42,18 +42,34 @@ export function requiredFor(s: Session, gapM: number, polarityFactor: number): F
   return a;
 }
 
+/**
+ * Required-voltage arrays by grids and law: the grids are shared between sessions on the same
+ * engine and conditions (grid.ts `gridsFor`), and so are these, which depend on nothing else.
+ */
+const requiredCaches = new WeakMap<EngineGrids, { air: Map<string, Float64Array>; paschen: Map<string, Float64Array> }>();
+function requiredCacheOf(grids: EngineGrids, model: BreakdownModel): Map<string, Float64Array> {
+  let c = requiredCaches.get(grids);
+  if (!c) {
+    c = { air: new Map(), paschen: new Map() };
+    requiredCaches.set(grids, c);
+  }
+  return model === 'paschen' ? c.paschen : c.air;
+}
+
 export function createSession(engine: EngineSpec, conditions?: ConditionInputs, options?: CheckOptions): Session {
   const c = resolveConditions(engine, conditions);
   const opts = options ?? {};
   const margin = c.marginRatio.value > 0 ? c.marginRatio.value : 1.25;
+  const grids = gridsFor(engine, c, opts.rpmPoints ?? 200);
+  const model = opts.breakdownModel ?? 'empirical-air';
   return {
     engine,
     conditions: c,
-    grids: buildGrids(engine, c, opts.rpmPoints ?? 200),
-    model: opts.breakdownModel ?? 'empirical-air',
+    grids,
+    model,
     margin,
     options: opts,
-    requiredCache: new Map(),
+    requiredCache: requiredCacheOf(grids, model),
     lastRequired: null,
   };
 }
@@ -136,5 +152,5 @@ export function ruleContext(s: Session, setup: SetupSpec, prep: PreparedSetup, g
 
 /** What a candidate is compared with: the existing setup's energy across the same rpm grid. */
 export function baselineOf(a: Analysis, label?: string): Baseline {
-  return { label: label ?? a.setup.label, energyJ: Float64Array.from(a.ws.energyJ), worstRatio: a.worstRatio };
+  return baselineFrom(label ?? a.setup.label, a.prep, a.ws, a.worstRatio);
 }

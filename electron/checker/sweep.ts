@@ -315,6 +315,9 @@ function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankin
   const nP = p.n;
   const arcVP = p.arcV;
   const riseSP = p.riseS;
+  // The fail ratio times the longest spark per primary ampere at break, Ls (eta / n) / V_arc, with
+  // a part in 10^8 to spare for rounding (SweepScope.offTimeFailRatio).
+  const longestSparkPerA = offRatio > 0 ? offRatio * ((secondaryInductanceHP * (etaP / nP)) / arcVP) * (1 + 1e-8) : 0;
   for (let i = 0; i < grid.n; i++) {
     const cranking = crankingGrid[i] === 1;
     if (crankingOnly && !cranking) continue;
@@ -411,7 +414,7 @@ function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankin
     const offS = period - dwell;
     // (Verdict only) a point whose off time outlasts the longest spark it could have by the fail
     // ratio cannot fail the off-time test: its duration is not needed (SweepScope.offTimeFailRatio).
-    const skipDuration = offRatio > 0 && offRatio * ((secondaryInductanceHP * ((etaP * current) / nP)) / arcVP) * (1 + 1e-9) <= offS;
+    const skipDuration = offRatio > 0 && longestSparkPerA * current <= offS;
     if (!skipDuration && current !== lastCurrent) {
       lastCurrent = current;
       lastDuration = inductiveSparkDurationS(secondaryInductanceHP, secondaryResistanceOhmP, (etaP * current) / nP, arcVP);

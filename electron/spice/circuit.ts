@@ -55,6 +55,11 @@ export interface SpiceCircuit {
   primary: PrimarySide;
   secondary: SecondarySide;
   cd: CdStage | null;
+  /**
+   * Coupling of the coil windings as the checker resolved it for this engine (the `couplingK`
+   * working condition); absent: `defaultCouplingK`. A deck option `couplingK` overrides it.
+   */
+  couplingK?: number;
 }
 
 export type Scenario = 'charge' | 'break' | 'fouled' | 'cd';

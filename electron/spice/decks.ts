@@ -80,7 +80,7 @@ function header(d: DeckWriter, what: string): void {
 }
 
 function inductiveDeck(c: SpiceCircuit, scenario: 'charge' | 'break' | 'fouled', opts: DeckOptions): SpiceDeck {
-  const k = opts.couplingK ?? defaultCouplingK;
+  const k = couplingOf(c, opts);
   const step = maxStepS(c, scenario, k, opts.timestepRefinement ?? 1);
   const breakS = closeAtS + c.primary.dwellS;
   const d = new DeckWriter(`${c.title} - ${scenario === 'charge' ? 'primary charge' : scenario === 'break' ? 'break with coupled secondary' : 'fouled plug'}`);
@@ -124,7 +124,7 @@ function inductiveDeck(c: SpiceCircuit, scenario: 'charge' | 'break' | 'fouled',
 
 function cdDeck(c: SpiceCircuit, opts: DeckOptions): SpiceDeck {
   const cd = c.cd!;
-  const k = opts.couplingK ?? defaultCouplingK;
+  const k = couplingOf(c, opts);
   const step = maxStepS(c, 'cd', k, opts.timestepRefinement ?? 1);
   const half = cdTransferHalfPeriodS(c, k);
   const fireS = closeAtS;
@@ -166,10 +166,15 @@ function cdDeck(c: SpiceCircuit, opts: DeckOptions): SpiceDeck {
   return { scenario: 'cd', text: writeControl(d), measures: measureNames.cd, eventS: fireS, maxStepS: step };
 }
 
+/** The coupling drawn: the option, else the circuit's own (the engine's resolved condition), else the default. */
+function couplingOf(c: SpiceCircuit, opts: DeckOptions): number {
+  return opts.couplingK ?? c.couplingK ?? defaultCouplingK;
+}
+
 /** Write the deck for one scenario; refuses a circuit with impossible values. */
 export function buildDeck(c: SpiceCircuit, scenario: Scenario, opts: DeckOptions = {}): SpiceDeck {
   const problems = circuitProblems(c, scenario);
-  const k = opts.couplingK ?? defaultCouplingK;
+  const k = couplingOf(c, opts);
   if (!(k > 0 && k < 1)) problems.push('couplingK: must be between 0 and 1 (exclusive).');
   if (opts.fouledShuntOhm !== undefined && !(opts.fouledShuntOhm > 0 && Number.isFinite(opts.fouledShuntOhm))) {
     problems.push('fouledShuntOhm: must be more than zero.');

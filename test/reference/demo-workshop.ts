@@ -13,14 +13,14 @@ export interface DemoWorkshop {
 }
 
 export function demoWorkshop(): DemoWorkshop {
-  const parts = demoParts.map((p, i) => ({ ...p, id: i + 1 }) as Part);
+  const parts = demoParts.map((p, i) => ({ ...p, id: i + 1, updatedAt: '2024-01-01T00:00:00.000Z' }) as Part);
   const ref: PartRef = (kind, name) => {
     if (name === null) return null;
     const found = parts.find((p) => p.kind === kind && p.name === name);
     if (!found) throw new Error(`The demo names a ${kind} "${name}" that is not in its parts bin.`);
     return found.id;
   };
-  const engines: Engine[] = demoEngines.map((e, i) => ({ ...resolveDemoEngine(e, ref), id: i + 1 }));
+  const engines: Engine[] = demoEngines.map((e, i) => ({ ...resolveDemoEngine(e, ref), id: i + 1, updatedAt: '2024-01-01T00:00:00.000Z' }));
   const plans: Plan[] = demoPlans.map((p, i) => {
     const e = engines.find((x) => x.name === p.engine);
     if (!e) throw new Error(`The demo plan "${p.name}" names an engine "${p.engine}" that is not in the demo.`);

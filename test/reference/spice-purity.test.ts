@@ -2,8 +2,9 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_COUPLING_K } from '../../electron/checker/index.js';
-import { buildDeck, DeckError, defaultCouplingK, spiceNumber } from '../../electron/spice/index.js';
+import { checkSetup, DEFAULT_COUPLING_K } from '../../electron/checker/index.js';
+import { buildDeck, circuitFromReport, DeckError, defaultCouplingK, spiceNumber } from '../../electron/spice/index.js';
+import { cdModule, fourCylinder, moduleSetup, pointsSetup } from '../checker/fixtures.js';
 
 const dir = resolve(import.meta.dirname, '../../electron/spice');
 
@@ -38,6 +39,18 @@ describe('electron/spice', () => {
     for (const scenario of ['break', 'cd'] as const) {
       const k = /^K1 L1 L2 (\S+)$/m.exec(buildDeck(circuit, scenario).text);
       expect(Number(k?.[1]), scenario).toBe(DEFAULT_COUPLING_K.value);
+    }
+  });
+
+  it("draws the engine's own coupling (its resolved working condition) in decks made from a report, and a deck option still wins", () => {
+    // 0.98 is the low end of the 0.98 to 0.999 quoted for oil-filled canister coils (from memory); any value other than the default shows the point.
+    const conditions = { couplingK: { value: 0.98, provenance: 'engine override' as const } };
+    for (const [scenario, spec] of [['break', pointsSetup()], ['cd', moduleSetup(cdModule())]] as const) {
+      const report = checkSetup(fourCylinder, spec, conditions, { skipGapSuggestion: true });
+      expect(report.circuit.couplingK).toBe(0.98);
+      const circuit = circuitFromReport(spec, report, 3000);
+      expect(Number(/^K1 L1 L2 (\S+)$/m.exec(buildDeck(circuit, scenario).text)?.[1]), scenario).toBe(0.98);
+      expect(Number(/^K1 L1 L2 (\S+)$/m.exec(buildDeck(circuit, scenario, { couplingK: 0.999 }).text)?.[1]), scenario).toBe(0.999);
     }
   });
 

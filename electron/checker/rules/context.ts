@@ -2,14 +2,29 @@
  * What every rule sees: the inputs, the prepared circuit and the sweep results. Rules only read.
  */
 import type { RpmGrid } from '../grid.js';
+import { sparkEnergyAt } from '../report-figures.js';
 import type { PreparedSetup } from '../prepare.js';
 import type { Workspace } from '../sweep.js';
 import type { EngineSpec, Figure, Intent, KeyOnReport, PlugGapSuggestion, ResolvedConditions, RuleId, RuleResult, SetupSpec, Verdict } from '../types.js';
 
+/** What a candidate is compared with: the existing setup across the same rpm grid. */
 export interface Baseline {
   label: string;
+  /** Stored energy per sweep point (0.5 L i^2 or 0.5 C V^2). */
   energyJ: Float64Array;
+  /** Energy delivered to the spark per sweep point (what the spark-energy rule compares). */
+  sparkEnergyJ: Float64Array;
+  /** Spark duration per sweep point (from a full sweep, never NaN). */
+  durationS: Float64Array;
   worstRatio: number;
+}
+
+/** A baseline from a setup's full sweep (`ws` with every column, its prepared circuit `p`). */
+export function baselineFrom(label: string, p: PreparedSetup, ws: Workspace, worstRatio: number): Baseline {
+  const n = ws.energyJ.length;
+  const sparkEnergyJ = new Float64Array(n);
+  for (let i = 0; i < n; i++) sparkEnergyJ[i] = sparkEnergyAt(p, ws, i);
+  return { label, energyJ: ws.energyJ.slice(), sparkEnergyJ, durationS: ws.durationS.slice(), worstRatio };
 }
 
 export interface RuleContext {

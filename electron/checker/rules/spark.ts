@@ -2,55 +2,157 @@
  * Rules about the spark itself across rpm: energy, voltage reserve, spark rate, off time, plug gap.
  */
 import type { Intent } from '../types.js';
-import { fig, fmt, isModuleKind, minOver, result, type FailTest, type Rule, type RuleContext } from './context.js';
+import { cdSparkEnergyJ } from '../cd.js';
+import { sparkEnergyAt } from '../report-figures.js';
+import { inductiveSparkEnergyJ } from '../secondary.js';
+import { fig, fmt, isModuleKind, result, type FailTest, type Rule, type RuleContext } from './context.js';
 
 /**
- * Floor below which we call a spark too weak to rely on: rich or lean mixtures need several mJ
- * (from memory), and a healthy points system delivers some tens of mJ.
+ * Delivered spark energy (the energy the arc receives, Heywood 1988, Internal Combustion Engine
+ * Fundamentals, ch. 9), not what the coil or capacitor stores: the two differ by a factor of 3 to 15
+ * and by kind (a CD unit hands over little of its 0.5 C V^2 in a short spark).
+ * Below DELIVERED_ENERGY_FAIL_J even a good mixture may not light: a stoichiometric mixture at the
+ * plug needs around 1 mJ or less (from memory). Below DELIVERED_ENERGY_CAUTION_J a lean or rich
+ * mixture or a wet plug, which need several mJ (from memory), may misfire.
  */
-export const ENERGY_FLOOR_J = 5e-3;
+export const DELIVERED_ENERGY_FAIL_J = 1e-3;
+export const DELIVERED_ENERGY_CAUTION_J = 3e-3;
+/**
+ * A spark shorter than this gives a lean or slow-burning mixture less time to catch (from memory:
+ * an inductive spark lasts 1 to 2 ms, a CD spark 0.1 to 0.3 ms).
+ */
+export const SPARK_DURATION_CAUTION_S = 0.5e-3;
+/** Against the existing setup at the same rpm: under 75 % of its delivered energy, or half its spark duration, is a caution (our limits). */
+export const BASELINE_ENERGY_CAUTION_RATIO = 0.75;
+export const BASELINE_DURATION_CAUTION_RATIO = 0.5;
+
+/** Delivered energy at a break current (inductive, magneto) or a charge voltage (CD); the same laws as the report's per-point figure. */
+function deliveredAt(p: RuleContext['p'], currentOrChargeV: number): number {
+  if (p.cd) return cdSparkEnergyJ(p.cd.capacitorF, currentOrChargeV, p.n, p.arcV, p.eta);
+  return inductiveSparkEnergyJ(p.secondaryInductanceH, p.secondaryResistanceOhm, (p.eta * currentOrChargeV) / p.n, p.arcV);
+}
+
+/**
+ * Lowest delivered spark energy from idle to redline and where. The delivered energy rises with the
+ * break current (inductive: (V_a^2 Ls / Rs^2)(x - ln(1 + x)), x = Rs I0 / V_a, increasing in I0) and with the
+ * charge voltage (CD: linear), and every other term is fixed for the setup, so the lowest is at the
+ * lowest current or charge voltage: one evaluation, cheap enough for the search's fail test, and
+ * never reading the spark-duration column (which the verdict-only pass may leave out).
+ * A point without a spark (available voltage 0) delivers nothing.
+ */
+export function lowestDeliveredEnergy({ ws, p, idleIndex, redlineIndex }: RuleContext): { value: number; index: number } {
+  const key = p.cd ? ws.cdChargeV : ws.currentA;
+  let lo = Infinity;
+  let index = idleIndex;
+  for (let i = idleIndex; i <= redlineIndex; i++) {
+    if (!(ws.availableV[i]! > 0)) return { value: 0, index: i };
+    const k = key[i]!;
+    if (k < lo) { lo = k; index = i; }
+  }
+  return { value: Number.isFinite(lo) ? deliveredAt(p, lo) : 0, index };
+}
 
 export const sparkEnergy: Rule = (ctx) => {
-  const { ws, idleIndex, redlineIndex, baseline, grid } = ctx;
+  const { ws, idleIndex, redlineIndex, baseline, grid, p } = ctx;
   const id = 'spark-energy';
-  const title = 'Spark energy across rpm';
-  const low = minOver(ws.energyJ, idleIndex, redlineIndex);
-  const figures = [fig('lowest energy, idle to redline', low.value * 1000, 'mJ'), fig('at rpm', grid.rpm[low.index]!, 'rpm'), fig('energy at cranking', ws.energyJ[0]! * 1000, 'mJ')];
-  const why = 'Energy is what keeps a spark alight through a lean or rich mixture; it falls with rpm as the coil has less time to charge.';
-  if (low.value < ENERGY_FLOOR_J) {
+  const title = 'Spark energy and duration across rpm';
+  const low = lowestDeliveredEnergy(ctx);
+  const lowRpm = grid.rpm[low.index]!;
+  let shortest = Infinity;
+  let shortI = idleIndex;
+  for (let i = idleIndex; i <= redlineIndex; i++) {
+    const d = ws.durationS[i]!;
+    if (ws.availableV[i]! > 0 && d < shortest) { shortest = d; shortI = i; }
+  }
+  const crankJ = sparkEnergyAt(p, ws, 0);
+  const figures = [
+    fig('lowest delivered spark energy, idle to redline', low.value * 1000, 'mJ'),
+    fig('at rpm', lowRpm, 'rpm'),
+    fig('stored in the coil or capacitor there', ws.energyJ[low.index]! * 1000, 'mJ'),
+    fig('shortest spark, idle to redline', shortest * 1000, 'ms'),
+    fig('shortest at rpm', grid.rpm[shortI]!, 'rpm'),
+    fig('delivered spark energy at cranking', crankJ * 1000, 'mJ'),
+  ];
+  const why = 'What lights the mixture is the energy the spark delivers to the arc and how long the spark lasts (Heywood 1988, ch. 9), not what the coil or capacitor stores; both fall with rpm as the coil has less time to charge.';
+  if (low.value < DELIVERED_ENERGY_FAIL_J) {
     if (ws.noSpark[low.index] === 1) {
-      return result(id, title, 'fail', figures, `${why} At ${fmt(grid.rpm[low.index]!, 0)} rpm the module's own supply is below what it needs to switch, so there is no spark at all.`, 'Give the module the supply it needs (see "Module supply while cranking" and "System voltage"), or choose a module that works at this voltage.', ['feed:improve']);
+      return result(id, title, 'fail', figures, `${why} At ${fmt(lowRpm, 0)} rpm the module's own supply is below what it needs to switch, so there is no spark at all.`, 'Give the module the supply it needs (see "Module supply while cranking" and "System voltage"), or choose a module that works at this voltage.', ['feed:improve']);
     }
     const more = lowEnergyAdvice(ctx);
-    return result(id, title, 'fail', figures, `${why} It drops to ${fmt(low.value * 1000)} mJ by ${fmt(grid.rpm[low.index]!, 0)} rpm, below the ${fmt(ENERGY_FLOOR_J * 1000)} mJ we treat as the least to rely on.`, more.text, more.intents);
+    return result(id, title, 'fail', figures, `${why} It delivers only ${fmt(low.value * 1000, 2)} mJ to the spark at ${fmt(lowRpm, 0)} rpm, below the ${fmt(DELIVERED_ENERGY_FAIL_J * 1000)} mJ that even a good mixture at the plug needs (from memory).`, more.text, more.intents);
+  }
+  const reasons: string[] = [];
+  const actions: string[] = [];
+  let intents: Intent[] | undefined;
+  if (ws.noSpark[0] === 1) {
+    reasons.push("While cranking the module's own supply is below what it needs to switch, so there is no spark to start on.");
+    actions.push('Give the module the supply it needs while cranking (see "Module supply while cranking").');
+    intents = ['feed:improve'];
+  } else if (crankJ < DELIVERED_ENERGY_CAUTION_J) {
+    reasons.push(`While cranking it delivers only ${fmt(crankJ * 1000, 2)} mJ to the spark.`);
+    actions.push(ctx.setup.ballast !== null && !ctx.setup.crankingBypass && p.kind !== 'capacitive-discharge' ? 'Expect hard starting; check the cranking supply, and consider a cranking bypass past the ballast.' : 'Expect hard starting; check the battery and the cranking supply.');
+  }
+  let weakRunning = false;
+  if (low.value < DELIVERED_ENERGY_CAUTION_J) {
+    weakRunning = true;
+    reasons.push(`It delivers as little as ${fmt(low.value * 1000, 2)} mJ at ${fmt(lowRpm, 0)} rpm; a lean or rich mixture or a wet plug needs several mJ (from memory, we take ${fmt(DELIVERED_ENERGY_CAUTION_J * 1000)} mJ).`);
+  }
+  if (shortest < SPARK_DURATION_CAUTION_S) {
+    weakRunning = true;
+    reasons.push(`Its spark lasts only ${fmt(shortest * 1000, 2)} ms (at ${fmt(grid.rpm[shortI]!, 0)} rpm), where an inductive spark lasts 1 to 2 ms: a short spark gives a lean or slow-burning mixture less time to catch.`);
   }
   if (baseline) {
-    let worstRel = Infinity;
-    let worstI = idleIndex;
+    let eRel = Infinity;
+    let eI = idleIndex;
+    let dRel = Infinity;
+    let dI = idleIndex;
     for (let i = idleIndex; i <= redlineIndex; i++) {
-      const b = baseline.energyJ[i]!;
+      const b = baseline.sparkEnergyJ[i]!;
       if (b > 0) {
-        const rel = ws.energyJ[i]! / b;
-        if (rel < worstRel) { worstRel = rel; worstI = i; }
+        const rel = sparkEnergyAt(p, ws, i) / b;
+        if (rel < eRel) { eRel = rel; eI = i; }
+      }
+      const bd = baseline.durationS[i]!;
+      if (bd > 0) {
+        const rel = ws.durationS[i]! / bd;
+        if (rel < dRel) { dRel = rel; dI = i; }
       }
     }
-    if (Number.isFinite(worstRel)) {
-      figures.push(fig(`relative to ${baseline.label}, worst`, worstRel * 100, '%'), fig('worst at rpm', grid.rpm[worstI]!, 'rpm'));
-      if (worstRel < 0.9) {
-        return result(id, title, 'caution', figures, `${why} At ${fmt(grid.rpm[worstI]!, 0)} rpm it gives ${fmt(worstRel * 100, 0)} % of the energy of ${baseline.label}.`, 'Acceptable if the reserve holds; otherwise choose a coil and module that charge harder at that speed.');
+    if (Number.isFinite(eRel)) {
+      figures.push(fig(`delivered energy relative to ${baseline.label}, worst`, eRel * 100, '%'), fig('worst at rpm', grid.rpm[eI]!, 'rpm'));
+      if (eRel < BASELINE_ENERGY_CAUTION_RATIO) {
+        weakRunning = true;
+        reasons.push(`At ${fmt(grid.rpm[eI]!, 0)} rpm it delivers ${fmt(eRel * 100, 0)} % of the spark energy of ${baseline.label} (${fmt(sparkEnergyAt(p, ws, eI) * 1000, 2)} mJ against ${fmt(baseline.sparkEnergyJ[eI]! * 1000, 2)} mJ).`);
+      }
+    }
+    if (Number.isFinite(dRel)) {
+      figures.push(fig(`spark duration relative to ${baseline.label}, worst`, dRel * 100, '%'), fig('shortest relative at rpm', grid.rpm[dI]!, 'rpm'));
+      if (dRel < BASELINE_DURATION_CAUTION_RATIO) {
+        weakRunning = true;
+        reasons.push(`At ${fmt(grid.rpm[dI]!, 0)} rpm its spark lasts ${fmt(dRel * 100, 0)} % as long as that of ${baseline.label} (${fmt(ws.durationS[dI]! * 1000, 2)} ms against ${fmt(baseline.durationS[dI]! * 1000, 2)} ms).`);
       }
     }
   }
-  if (ws.noSpark[0] === 1) {
-    return result(id, title, 'caution', figures, `${why} While cranking the module's own supply is below what it needs to switch, so there is no spark to start on.`, 'Give the module the supply it needs while cranking (see "Module supply while cranking").', ['feed:improve']);
-  }
-  if (ws.energyJ[0]! < ENERGY_FLOOR_J) {
-    return result(id, title, 'caution', figures, `${why} While cranking it gives only ${fmt(ws.energyJ[0]! * 1000)} mJ.`, ctx.setup.ballast !== null && !ctx.setup.crankingBypass && ctx.p.kind !== 'capacitive-discharge' ? 'Expect hard starting; check the cranking supply, and consider a cranking bypass past the ballast.' : 'Expect hard starting; check the battery and the cranking supply.');
-  }
-  return result(id, title, 'pass', figures, why, 'Nothing to do.');
+  if (weakRunning) actions.push(weakSparkAdvice(ctx));
+  if (reasons.length === 0) return result(id, title, 'pass', figures, why, 'Nothing to do.');
+  return result(id, title, 'caution', figures, `${why} ${reasons.join(' ')}`, actions.join(' '), intents);
 };
 
-export const sparkEnergyFails: FailTest = (ctx) => minOver(ctx.ws.energyJ, ctx.idleIndex, ctx.redlineIndex).value < ENERGY_FLOOR_J;
+export const sparkEnergyFails: FailTest = (ctx) => lowestDeliveredEnergy(ctx).value < DELIVERED_ENERGY_FAIL_J;
+
+/**
+ * What to do about a spark weaker or shorter than it might be, depending on whether the voltage
+ * reserve holds (it fires the plug at all) and in the words of the system.
+ */
+function weakSparkAdvice(ctx: RuleContext): string {
+  const { worstRatio, margin, p } = ctx;
+  const cd = p.kind === 'capacitive-discharge';
+  if (worstRatio >= margin) {
+    return `Acceptable: the voltage reserve holds (worst ${fmt(worstRatio, 2)} against the ${fmt(margin, 2)} margin), so it fires the plug; a clean, well-tuned engine runs on it, and a lean mixture at light load, a rich cold start or a wet plug shows the difference first.${cd ? ' A CD unit that fires several sparks at low rpm makes up for its short spark where it matters most.' : ''}`;
+  }
+  const stronger = cd ? 'choose a CD unit with a larger capacitor or a stronger charger, or an inductive module for a longer spark' : 'choose a coil and module that charge harder at that speed';
+  return `Not to be relied on: the voltage reserve does not hold either (worst ${fmt(worstRatio, 2)} against the ${fmt(margin, 2)} margin, see "Voltage reserve"); ${stronger}.`;
+}
 
 /** Available against required voltage, with the common-practice margin of 1.25. */
 export const voltageReserve: Rule = (ctx) => {

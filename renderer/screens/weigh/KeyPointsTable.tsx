@@ -1,7 +1,13 @@
-/** The four speeds a restorer asks about (cranking, idle, mid-range, redline), setups side by side. */
+/**
+ * The four speeds a restorer asks about (cranking, idle, mid-range, redline), setups side by side:
+ * the energy stored and the energy the spark delivers with how long it lasts (what compares kinds
+ * fairly, Heywood 1988, ch. 9), the voltages, and the cylinder state and ballast temperature there.
+ */
 import type { ReactNode } from 'react';
 import type { ShownPoint, ShownSetup } from '../../../electron/ipc/channels.js';
-import { number, ratioText, rpmText } from './words.js';
+import { useGapUnit } from '../../app/units.js';
+import { perSpeedFigure, perSpeedKinds, type SpeedKey } from './SetupFigures.js';
+import { figureText, number, ratioText, rpmText } from './words.js';
 
 const speeds = [
   { key: 'cranking', label: 'Cranking' },
@@ -12,6 +18,8 @@ const speeds = [
 
 const rows: Array<{ label: string; text: (p: ShownPoint) => string }> = [
   { label: 'Energy stored per spark', text: (p) => `${number(p.energyMj, 1)} mJ` },
+  { label: 'Energy the spark delivers', text: (p) => `${number(p.sparkEnergyMj, 2)} mJ` },
+  { label: 'Spark lasts', text: (p) => `${number(p.sparkDurationMs, 2)} ms` },
   { label: 'Voltage available', text: (p) => `${number(p.availableKv, 1)} kV` },
   { label: 'Voltage the plug needs', text: (p) => `${number(p.requiredKv, 1)} kV` },
   { label: 'Reserve (available ÷ needed)', text: (p) => ratioText(p.reserveRatio) },
@@ -20,6 +28,7 @@ const rows: Array<{ label: string; text: (p: ShownPoint) => string }> = [
 ];
 
 export function KeyPointsTable({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
+  const [unit] = useGapUnit();
   const first = setups[0];
   if (!first) return null;
   return (
@@ -70,6 +79,20 @@ export function KeyPointsTable({ setups, margin }: { setups: readonly ShownSetup
               })}
             </tr>
           ))}
+          {perSpeedKinds.map((k) => {
+            const figs = setups.map((s) => perSpeedFigure(s, k.key, sp.key as SpeedKey));
+            if (figs.every((f) => f === null)) return null;
+            return (
+              <tr key={k.key} data-testid={`speed-figure-${k.key}-${sp.key}`}>
+                <th scope="row">{k.label}</th>
+                {figs.map((f, i) => (
+                  <td key={i} className="num">
+                    {f ? figureText(f.value, f.unit, unit) : '— (none)'}
+                  </td>
+                ))}
+              </tr>
+            );
+          })}
         </tbody>
       ))}
     </table>

@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import type { ShownSetup } from '../../../electron/ipc/channels.js';
 import { styleFor } from '../../charts/palette.js';
 import { useGapUnit } from '../../app/units.js';
+import { SetupFigures } from './SetupFigures.js';
 import { VerdictBadge } from './Verdict.js';
 import { figureName, figureText, gapWithUnit, number, rpmText, verdictWords } from './words.js';
 
@@ -41,6 +42,9 @@ export function SetupCards({ setups, margin }: { setups: readonly ShownSetup[]; 
                 ? `Keeps the ${number(margin, 2)} × voltage margin from idle to beyond redline.`
                 : `Falls below the ${number(margin, 2)} × voltage margin from ${rpmText(s.belowMarginFromRpm)}.`}
             </p>
+            <p className="card-line spark-line" data-testid={`spark-line-${i}`}>
+              Spark at idle: {number(s.keyPoints.idle.sparkEnergyMj, 2)} mJ delivered over {number(s.keyPoints.idle.sparkDurationMs, 2)} ms ({number(s.keyPoints.idle.energyMj, 1)} mJ stored); at redline {number(s.keyPoints.redline.sparkEnergyMj, 2)} mJ over {number(s.keyPoints.redline.sparkDurationMs, 2)} ms.
+            </p>
             <p className="card-line">
               Plug gap {gapWithUnit(s.plugGapMm, unit)}; largest that keeps the margin: {s.suggestedGapMm === null ? 'none found' : gapWithUnit(s.suggestedGapMm, unit)}.
             </p>
@@ -56,6 +60,7 @@ export function SetupCards({ setups, margin }: { setups: readonly ShownSetup[]; 
                 </ol>
               </div>
             ) : null}
+            <SetupFigures setup={s} index={i} />
             {s.measured.length > 0 ? (
               <p className="card-line measured-line">
                 <span className="measured-tag">Measured</span>{' '}
