@@ -40,6 +40,14 @@ const jobs = [
     external: ['electron', 'better-sqlite3'],
     banner: { js: requireShim },
   }),
+  // The parts-bin search's worker thread (electron/ipc/search-runner.ts starts it beside main.js).
+  build({
+    ...common,
+    entryPoints: [at('electron/ipc/search-worker.ts')],
+    outfile: path.join(outDir, 'search-worker.js'),
+    format: 'esm',
+    banner: { js: requireShim },
+  }),
   build({
     ...common,
     entryPoints: [at('electron/preload.ts')],

@@ -27,7 +27,8 @@ module.exports = {
   asar: true,
   // A native module cannot be loaded from inside an asar archive; Electron redirects the load
   // to app.asar.unpacked, where this puts the file.
-  asarUnpack: ['**/node_modules/better-sqlite3/**/*.node'],
+  // The search's worker thread is started from a real file path too (electron/ipc/search-runner.ts).
+  asarUnpack: ['**/node_modules/better-sqlite3/**/*.node', 'dist-electron/search-worker.js'],
   // better-sqlite3 in node_modules is built for Node's ABI; rebuild it for Electron's.
   npmRebuild: true,
   buildDependenciesFromSource: true,

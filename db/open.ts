@@ -7,9 +7,14 @@
  * - synchronous = FULL: a save the user saw succeed survives a power cut; the workshop writes a
  *   few rows at a time, so the extra fsync costs nothing anyone notices.
  * The version check runs before anything writes, so a file from a newer app is left byte-for-byte
- * as it was.
+ * as it was. So does the check that the file is ours: `user_version` 0 means a new workshop only
+ * when the file holds nothing at all; another program's database (tables, but user_version 0) is
+ * refused and left as it was. WAL is switched on only after both checks pass (switching rewrites
+ * the file header).
  */
 import Database from 'better-sqlite3';
+import { dirname } from 'node:path';
+import { backupBeforeMigration } from './backup.js';
 import { StoreError } from './errors.js';
 import { migrations } from './migrations/index.js';
 import { migrate, readUserVersion, tooNewMessage } from './migrations/runner.js';
@@ -32,14 +37,48 @@ export function openStore(file: string): Database.Database {
       throw err;
     }
     if (found > SCHEMA_VERSION) throw new StoreError('STORE_TOO_NEW', tooNewMessage(found, SCHEMA_VERSION));
+    if (found === 0) refuseForeign(db, file);
+    // A damaged file is found here, before anything writes (WAL, migrations), so it is never changed.
+    if (found > 0 && !db.memory) quickCheck(db, file);
     if (!db.memory) db.pragma('journal_mode = WAL');
     db.pragma('synchronous = FULL');
+    // A file about to be upgraded is backed up first (db/backup.ts); a new file has nothing to lose.
+    if (found > 0 && found < SCHEMA_VERSION) backupBeforeMigration(db, dirname(file));
     migrate(db, migrations);
     return db;
   } catch (err) {
     db.close();
     throw err;
   }
+}
+
+/** PRAGMA quick_check (sqlite.org/pragma.html#pragma_quick_check): every page and record readable, in O(N). */
+function quickCheck(db: Database.Database, file: string): void {
+  const rows = db.pragma('quick_check(5)', { simple: false }) as Array<{ quick_check: string }>;
+  if (rows.length === 1 && rows[0]!.quick_check === 'ok') return;
+  throw new StoreError('CORRUPT', `The workshop file ${file} is damaged (${rows.map((r) => r.quick_check).join('; ').slice(0, 200)}). It was not changed.`);
+}
+
+/**
+ * Opens the file read-only, without checks or migrations, to export what can still be read from a
+ * file that will not open normally. Nothing is written (SQLite's read-only mode).
+ */
+export function openReadOnly(file: string): Database.Database {
+  const db = new Database(file, { readonly: true, fileMustExist: true });
+  db.pragma(`busy_timeout = ${BUSY_TIMEOUT_MS}`);
+  return db;
+}
+
+/** Anything in sqlite_master (a table, index, view or trigger) in a file without our version is someone else's. */
+function refuseForeign(db: Database.Database, file: string): void {
+  const objects = db.prepare<[], { type: string; name: string }>("SELECT type, name FROM sqlite_master WHERE name NOT LIKE 'sqlite_%' ORDER BY type, name").all();
+  if (objects.length === 0) return;
+  const tables = objects.filter((o) => o.type === 'table').map((o) => o.name);
+  const shown = tables.slice(0, 3).join(', ') + (tables.length > 3 ? ', ...' : '');
+  throw new StoreError(
+    'FOREIGN_FILE',
+    `The file ${file} is not a workshop file: it is another program's database${tables.length > 0 ? ` (${tables.length === 1 ? 'table' : 'tables'} ${shown})` : ''}. It was not opened and not changed. Choose another data folder for the workshop.`,
+  );
 }
 
 /** Lets SQLite refresh its query statistics, then closes. Safe to call twice. */

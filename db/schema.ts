@@ -10,6 +10,8 @@ import { z } from 'zod';
 import { conditionDescriptors, conditionKeys, rangeMessage, type ConditionDescriptor, type ConditionKey } from './conditions.js';
 export { conditionByKey, conditionDescriptors, conditionGroupTitles, conditionKeys, conditionText, rangeMessage, toStored, toTyped } from './conditions.js';
 export type { ConditionContext, ConditionDescriptor, ConditionGroup, ConditionKey, DefaultSource } from './conditions.js';
+import { textRules } from './text-rules.js';
+export { textProblem } from './text-rules.js';
 
 const id = z.number().int().positive();
 const text = (max: number) => z.string().max(max, `Keep this under ${max} characters.`);
@@ -148,10 +150,30 @@ function engineRules(e: z.infer<typeof engineFields>, ctx: z.RefinementCtx): voi
   }
 }
 
+/** The highest rpm an advance-curve row may name: the same limit as the redline field. */
+export const ADVANCE_RPM_MAX = 20000;
+
+/**
+ * Checks only what a form or an import sends (never rows already stored, which must stay readable):
+ * the text fields and the advance curve's rpm.
+ */
+function engineInputRules(e: z.infer<typeof engineFields>, ctx: z.RefinementCtx): void {
+  textRules([
+    { key: 'name', words: 'The name', visible: true },
+    { key: 'notes', words: 'The notes', multiLine: true },
+    { key: 'yearText', words: 'The year' },
+    { key: 'modelText', words: 'The model' },
+  ])(e, ctx);
+  e.advanceCurve.forEach((p, i) => {
+    if (p.rpm > ADVANCE_RPM_MAX) ctx.addIssue({ code: 'custom', path: ['advanceCurve', i, 'rpm'], message: `An advance-curve rpm above ${ADVANCE_RPM_MAX} is not plausible.` });
+  });
+}
+
 /** What a form or an import sends to create or replace an engine. */
-export const engineInput = engineFields.superRefine(engineRules);
+export const engineInput = engineFields.superRefine(engineRules).superRefine(engineInputRules);
 /** An engine as stored, with its id. */
-export const engine = engineFields.extend({ id }).superRefine(engineRules);
+/** An engine as stored, with its id and when it last changed (sent back with an update or delete so a stale screen cannot overwrite a newer save). */
+export const engine = engineFields.extend({ id, updatedAt: z.string() }).superRefine(engineRules);
 
 // ---------------------------------------------------------------------------------------------
 // Parts: one kind each, told apart by `kind`.
@@ -274,14 +296,21 @@ export const plug = z.object({
   gapMaxMm: positive('Largest gap', 3),
 });
 
-export const partInput = z.discriminatedUnion('kind', [coil, ballast, ignitionModule, tach, leads, plug], {
+const partChecked = z.discriminatedUnion('kind', [coil, ballast, ignitionModule, tach, leads, plug], {
   error: 'Unknown part kind: use coil, ballast, module, tach, leads or plug.',
 }).superRefine((p, ctx) => {
   if (p.kind === 'plug' && !(p.gapMinMm <= p.gapMaxMm)) {
     ctx.addIssue({ code: 'custom', path: ['gapMaxMm'], message: 'The largest gap must not be below the smallest.' });
   }
 });
-export const part = z.intersection(partInput, z.object({ id }));
+/** What a form or an import sends; the text rules apply to input only (stored rows stay readable). */
+export const partInput = partChecked.superRefine(
+  textRules([
+    { key: 'name', words: 'The name', visible: true },
+    { key: 'notes', words: 'The notes', multiLine: true },
+  ]),
+);
+export const part = z.intersection(partChecked, z.object({ id, updatedAt: z.string() }));
 export const partKinds = ['coil', 'ballast', 'module', 'tach', 'leads', 'plug'] as const;
 export const partKind = z.enum(partKinds);
 
@@ -309,13 +338,17 @@ export const planFields = z.object({
   plugId: id.nullable(),
   plugGapMm: positive('Plug gap', 3),
 });
-export const planInput = planFields;
+const planTextRules = textRules([
+  { key: 'name', words: 'The plan name', visible: true },
+  { key: 'notes', words: 'The notes', multiLine: true },
+]);
+export const planInput = planFields.superRefine(planTextRules);
 /**
  * What an edit of a plan sends: the same fields, the status optional. The status moves with the
  * work (weighed, wired, done) and by hand through its own request, so an editor that was opened
  * before the plan moved on leaves it out and cannot put the old status back.
  */
-export const planUpdateInput = planFields.extend({ status: planStatus.optional() });
+export const planUpdateInput = planFields.extend({ status: planStatus.optional() }).superRefine(planTextRules);
 export const plan = planFields.extend({ id, updatedAt: z.string() });
 
 // ---------------------------------------------------------------------------------------------
@@ -488,6 +521,41 @@ export function isCalendarDate(text: string): boolean {
   return days !== undefined && d >= 1 && d <= days;
 }
 
+/**
+ * The values a workshop meter can plausibly show for each quantity, in its stored unit. Checked on
+ * what is typed only (a stored reading outside stays readable). From memory / common practice:
+ * a 6 or 12 V car's circuits read well inside +-100 V and +-50 A on a workshop multimeter; coil
+ * primaries, ballasts and leads are ohms to tens of kilohms; dwell is at most a full distributor
+ * turn (360 degrees); timing marks run from after TDC to well under 90 degrees before it.
+ */
+export const readingRanges: Partial<Record<ReadingQuantity, { min: number; max: number; why: string }>> = (() => {
+  const volts = { min: -100, max: 100, why: 'a 6 or 12 V car reads well inside this' };
+  const amps = { min: -50, max: 50, why: 'an ignition circuit draws far less' };
+  const ohms = { min: 0, max: 100000, why: 'a resistance is not negative, and a coil, ballast or lead is far below 100 kohm' };
+  const kohms = { min: 0, max: 1000, why: 'a resistance is not negative, and a secondary winding or lead is far below 1 Mohm' };
+  return {
+    'battery-voltage-resting': volts,
+    'coil-primary-resistance': ohms,
+    'coil-secondary-resistance': kohms,
+    'ballast-resistance': ohms,
+    'ht-lead-resistance': kohms,
+    'key-on-current': amps,
+    'coil-feed-voltage-key-on': volts,
+    'coil-switch-voltage-key-on': volts,
+    'coil-voltage-after-shut-off': volts,
+    'supply-voltage-cranking': volts,
+    'coil-feed-voltage-cranking': volts,
+    'module-supply-voltage-cranking': volts,
+    'supply-voltage-running': volts,
+    'dwell-angle': { min: 0, max: 360, why: 'dwell is part of one distributor turn' },
+    'tach-idle-rpm': { min: 0, max: 20000, why: 'the same limit as the redline' },
+    'timing-idle': { min: -30, max: 90, why: 'timing marks run from after TDC to well under 90 degrees before it' },
+    'timing-advanced': { min: -30, max: 90, why: 'timing marks run from after TDC to well under 90 degrees before it' },
+    'plug-gap': { min: 0, max: 5, why: 'a plug gap is a fraction of a millimetre to a few millimetres' },
+    other: { min: -1e9, max: 1e9, why: 'a meter shows nothing larger' },
+  };
+})();
+
 const readingFields = z.strictObject({
   planId: id,
   quantity: z.enum(readingQuantities, { error: 'Pick what was measured from the list.' }),
@@ -508,6 +576,21 @@ export const readingInput = readingFields.superRefine((r, ctx) => {
   }
   const stored = toStoredUnit(r.quantity, r.value, r.unit);
   if (!stored.ok) ctx.addIssue({ code: 'custom', path: ['unit'], message: stored.message });
+  else {
+    const range = readingRanges[r.quantity];
+    if (range && !(stored.value >= range.min && stored.value <= range.max)) {
+      const unit = readingUnits[r.quantity];
+      ctx.addIssue({
+        code: 'custom',
+        path: ['value'],
+        message: `${readingWords[r.quantity]} must be between ${range.min} and ${range.max}${unit ? ` ${unit}` : ''} (${range.why}).`,
+      });
+    }
+  }
+  textRules([
+    { key: 'note', words: 'The note', multiLine: true },
+    { key: 'unit', words: 'The unit' },
+  ])(r, ctx);
 });
 
 /**
@@ -515,7 +598,7 @@ export const readingInput = readingFields.superRefine((r, ctx) => {
  * converted the older rows). The note may be longer than a form allows because migration 002
  * prefixes a sentence to the note of a reading it had to move to 'other'.
  */
-export const reading = readingFields.extend({ id, note: text(1000) }).superRefine((r, ctx) => {
+export const reading = readingFields.extend({ id, note: text(1000), updatedAt: z.string() }).superRefine((r, ctx) => {
   const target = readingUnits[r.quantity];
   if (target !== '' && r.unit !== target) {
     ctx.addIssue({ code: 'custom', path: ['unit'], message: `${readingWords[r.quantity]} is kept in ${target}, but this row says ${r.unit || 'no unit'}.` });

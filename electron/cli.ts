@@ -7,22 +7,29 @@ import { checklistCommand } from './cli/checklist.js';
 import { checkCommand, netlistCommand, searchCommand } from './cli/commands.js';
 import { CliError } from './cli/errors.js';
 import { usage } from './cli/help.js';
+import { backupCommand, exportCommand, importCommand, partsCsvCommand, restoreCommand } from './cli/records.js';
 
-const commands: Record<string, (args: ReturnType<typeof parseArgs>) => string> = {
+const commands: Record<string, (args: ReturnType<typeof parseArgs>) => string | Promise<string>> = {
   check: checkCommand,
   search: searchCommand,
   netlist: netlistCommand,
   checklist: checklistCommand,
+  export: exportCommand,
+  import: importCommand,
+  backup: backupCommand,
+  restore: restoreCommand,
+  'parts-csv': partsCsvCommand,
 };
+const names = 'check, search, netlist, checklist, export, import, backup, restore or parts-csv';
 
-export function runCli(argv: readonly string[]): { code: number; stdout: string; stderr: string } {
+export async function runCli(argv: readonly string[]): Promise<{ code: number; stdout: string; stderr: string }> {
   const args = parseArgs(argv);
   if (args.flags.get('help') === true || args.command === 'help') return { code: 0, stdout: usage, stderr: '' };
-  if (args.command === null) return { code: 2, stdout: '', stderr: `Give a command: check, search, netlist or checklist.\n\n${usage}` };
+  if (args.command === null) return { code: 2, stdout: '', stderr: `Give a command: ${names}.\n\n${usage}` };
   const run = commands[args.command];
-  if (!run) return { code: 2, stdout: '', stderr: `Unknown command "${args.command}": use check, search, netlist or checklist (or --help).\n` };
+  if (!run) return { code: 2, stdout: '', stderr: `Unknown command "${args.command}": use ${names} (or --help).\n` };
   try {
-    return { code: 0, stdout: run(args), stderr: '' };
+    return { code: 0, stdout: await run(args), stderr: '' };
   } catch (e) {
     if (e instanceof CliError) return { code: e.exitCode, stdout: '', stderr: `${e.message}\n` };
     const message = e instanceof Error ? e.message : String(e);
@@ -30,7 +37,7 @@ export function runCli(argv: readonly string[]): { code: number; stdout: string;
   }
 }
 
-const result = runCli(process.argv.slice(2));
+const result = await runCli(process.argv.slice(2));
 if (result.stdout) process.stdout.write(result.stdout);
 if (result.stderr) process.stderr.write(result.stderr);
 process.exitCode = result.code;

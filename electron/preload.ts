@@ -35,11 +35,23 @@ const bridge = {
   'readings.delete': call('readings.delete'),
   'readings.update': call('readings.update'),
   'plans.setStatus': call('plans.setStatus'),
+  'store.unreadable': call('store.unreadable'),
+  'check.cancel': call('check.cancel'),
+  'check.progress': call('check.progress'),
   'sheet.get': call('sheet.get'),
   'sheet.tick': call('sheet.tick'),
   'app.print': call('app.print'),
   'check.plans': call('check.plans'),
   'check.search': call('check.search'),
+  'backup.create': call('backup.create'),
+  'backup.list': call('backup.list'),
+  'backup.restore': call('backup.restore'),
+  'workshop.export': call('workshop.export'),
+  'workshop.importPreview': call('workshop.importPreview'),
+  'workshop.import': call('workshop.import'),
+  'parts.csvExport': call('parts.csvExport'),
+  'parts.csvImportPreview': call('parts.csvImportPreview'),
+  'parts.csvImport': call('parts.csvImport'),
 } satisfies BridgeApi;
 
 contextBridge.exposeInMainWorld(bridgeGlobalName, Object.freeze(bridge));

@@ -10,6 +10,8 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { STORE_FILE_NAME } from '../db/location.js';
+import { describeStartupProblem, type WayOut } from '../db/startup-problem.js';
 import { openBackend } from './ipc/backend.js';
 import { HostArgsError, parseHostArgs } from './host/args.js';
 import { createHostServer } from './host/server.js';
@@ -22,6 +24,15 @@ function appVersion(): string {
   const pkg = JSON.parse(readFileSync(path.join(projectRoot, 'package.json'), 'utf8')) as { version?: unknown };
   return typeof pkg.version === 'string' ? pkg.version : '0.0.0';
 }
+
+/** The ways out, in the browser host's own terms (the desktop app offers them as buttons). */
+const WAY_OUT_HERE: Record<WayOut, string> = {
+  'newest-backup': 'Open this folder in the desktop app: it offers to put the newest backup in place (the damaged file is kept beside it, renamed with the date).',
+  'read-only-export': 'Open this folder in the desktop app: it offers to open the file read-only and export what can still be read.',
+  'other-folder': 'Start on another folder: --data-dir <another folder>.',
+  'close-other': 'Close the other copy of the app using this folder, then start again.',
+  'update-app': 'Install a newer version of the app.',
+};
 
 function main(): void {
   let args;
@@ -39,7 +50,10 @@ function main(): void {
   try {
     backend = openBackend({ dataDir: args.dataDir, host: 'browser', version: appVersion() });
   } catch (err) {
-    console.error(`The workshop store in ${args.dataDir} could not be opened: ${err instanceof Error ? err.message : String(err)}`);
+    // A plain sentence with the file's path and what to do; never SQLite's own words alone.
+    const problem = describeStartupProblem(err, path.join(args.dataDir, STORE_FILE_NAME), args.dataDir);
+    console.error(problem.sentence);
+    console.error(problem.waysOut.map((w) => `- ${WAY_OUT_HERE[w]}`).join('\n'));
     process.exit(1);
   }
 

@@ -43,12 +43,18 @@ export function migrate(db: Database.Database, list: readonly Migration[], targe
   return readUserVersion(db);
 }
 
-function applyOne(db: Database.Database, m: Migration): void {
+/** Applies one migration if the file is just below it (read again under the write lock); exported for the race test. */
+export function applyOne(db: Database.Database, m: Migration): void {
   // foreign_keys cannot change inside a transaction, so it is switched around it.
   const keysWereOn = db.pragma('foreign_keys', { simple: true }) === 1;
   if (m.rebuildsTables) db.pragma('foreign_keys = OFF');
   try {
+    // IMMEDIATE takes the write lock at BEGIN; the version is read again under it, so when two
+    // processes open a file at once the second waits, finds the migration done, and skips it.
     db.transaction(() => {
+      const now = readUserVersion(db);
+      if (now >= m.version) return;
+      if (now !== m.version - 1) throw new Error(`Migration ${m.version} (${m.name}) expected the file at version ${m.version - 1}, found ${now}.`);
       db.exec(m.sql);
       if (m.rebuildsTables) {
         const broken = db.pragma('foreign_key_check') as unknown[];
@@ -58,7 +64,7 @@ function applyOne(db: Database.Database, m: Migration): void {
       }
       // user_version is part of the file header and is written inside this transaction.
       db.pragma(`user_version = ${m.version}`);
-    })();
+    }).immediate();
   } finally {
     if (m.rebuildsTables && keysWereOn) db.pragma('foreign_keys = ON');
   }

@@ -4,7 +4,7 @@
  */
 import { engine as engineSchema, engineInput, type Engine, type EngineInput } from '../schema.js';
 import { StoreError } from '../errors.js';
-import { nowIso, parseInput, parseJsonColumn, parseStored, partRefChecker, plural, type RepoContext } from './shared.js';
+import { checkVersion, nextStamp, nowIso, parseInput, parseJsonColumn, parseStored, partRefChecker, plural, writeTx, type RepoContext } from './shared.js';
 
 /** What the engine list shows; the same shape as `engineSummary` in electron/ipc/channels.ts. */
 export type EngineSummary = {
@@ -16,15 +16,21 @@ export type EngineSummary = {
   systemVoltageV: number;
   earthPolarity: string;
   planCount: number;
+  /** The engine's version, sent back with a delete from the list. */
+  updatedAt: string;
 };
 
 export type EnginesRepository = {
   list(): EngineSummary[];
   get(id: number): Engine;
   create(input: EngineInput): Engine;
-  update(id: number, input: EngineInput): Engine;
-  /** Refused with IN_USE while plans use the engine, unless `deletePlansToo` (then plans and their readings go too). */
-  delete(id: number, opts: { deletePlansToo: boolean }): { deleted: true; plansDeleted: number };
+  /** `expectedUpdatedAt` is the `updatedAt` the user saw: if the engine changed since, STALE and nothing is written. */
+  update(id: number, input: EngineInput, expectedUpdatedAt: string): Engine;
+  /**
+   * Refused with IN_USE while plans use the engine, unless `deletePlansToo` (then plans and their readings go too);
+   * STALE if the engine changed since the user saw it. Works on a row that no longer parses.
+   */
+  delete(id: number, opts: { deletePlansToo: boolean; expectedUpdatedAt: string }): { deleted: true; plansDeleted: number };
   count(): number;
 };
 
@@ -53,6 +59,7 @@ type EngineRow = {
   static_timing_deg_btdc: number;
   existing: string;
   conditions: string;
+  updated_at: string;
 };
 
 const COLUMNS = `name, notes, year_text, model_text, cylinders, cycle, firing_order, bore_mm, stroke_mm, con_rod_mm,
@@ -74,10 +81,11 @@ export function createEnginesRepository(ctx: RepoContext): EnginesRepository {
     list: db.prepare<[], EngineSummary>(
       `SELECT e.id, e.name, e.year_text AS yearText, e.model_text AS modelText, e.cylinders,
               e.system_voltage_v AS systemVoltageV, e.earth_polarity AS earthPolarity,
-              (SELECT COUNT(*) FROM plans p WHERE p.engine_id = e.id) AS planCount
+              (SELECT COUNT(*) FROM plans p WHERE p.engine_id = e.id) AS planCount, e.updated_at AS updatedAt
          FROM engines e ORDER BY e.name COLLATE NOCASE, e.id`,
     ),
-    get: db.prepare<[number], EngineRow>(`SELECT id, ${COLUMNS} FROM engines WHERE id = ?`),
+    get: db.prepare<[number], EngineRow>(`SELECT id, ${COLUMNS}, updated_at FROM engines WHERE id = ?`),
+    version: db.prepare<[number], { updated_at: string }>('SELECT updated_at FROM engines WHERE id = ?'),
     curve: db.prepare<[number], { rpm: number; advanceDeg: number }>(
       'SELECT rpm, advance_deg AS advanceDeg FROM advance_points WHERE engine_id = ? ORDER BY position',
     ),
@@ -121,6 +129,7 @@ export function createEnginesRepository(ctx: RepoContext): EnginesRepository {
       advanceCurve: s.curve.all(id),
       existing: parseJsonColumn('engines', id, 'existing setup', row.existing),
       conditions: parseJsonColumn('engines', id, 'conditions', row.conditions),
+      updatedAt: row.updated_at,
     };
     return parseStored(engineSchema, 'engines', id, value);
   }
@@ -142,20 +151,27 @@ export function createEnginesRepository(ctx: RepoContext): EnginesRepository {
     e.advanceCurve.forEach((p, i) => s.insertPoint.run(id, i, p.rpm, p.advanceDeg));
   }
 
-  const createTx = db.transaction((e: EngineInput): number => {
+  const notFound = (id: number) => new StoreError('NOT_FOUND', `There is no engine with id ${id}; it may have been deleted.`);
+
+  const createTx = (e: EngineInput): number => {
     const id = Number(s.insert.run({ ...toParams(e), now: nowIso() }).lastInsertRowid);
     writeCurve(id, e);
     return id;
-  });
+  };
 
-  const updateTx = db.transaction((id: number, e: EngineInput): void => {
-    const changed = s.update.run({ ...toParams(e), now: nowIso(), id }).changes;
-    if (changed === 0) throw new StoreError('NOT_FOUND', `There is no engine with id ${id}; it may have been deleted.`);
+  const updateTx = (id: number, e: EngineInput, expected: string): void => {
+    const stored = s.version.get(id);
+    if (!stored) throw notFound(id);
+    checkVersion('engine', id, stored.updated_at, expected, false);
+    s.update.run({ ...toParams(e), now: nextStamp(stored.updated_at), id });
     writeCurve(id, e);
-  });
+  };
 
-  const deleteTx = db.transaction((id: number, deletePlansToo: boolean) => {
-    if (!s.get.get(id)) throw new StoreError('NOT_FOUND', `There is no engine with id ${id}; it may have been deleted.`);
+  // Checks the row exists from its version column alone, so a row that no longer parses can be deleted.
+  const deleteTx = (id: number, deletePlansToo: boolean, expected: string) => {
+    const stored = s.version.get(id);
+    if (!stored) throw notFound(id);
+    checkVersion('engine', id, stored.updated_at, expected, true);
     const plans = s.planCount.get(id)!.n;
     if (plans > 0 && !deletePlansToo) {
       throw new StoreError(
@@ -167,19 +183,19 @@ export function createEnginesRepository(ctx: RepoContext): EnginesRepository {
     // its plans and their readings together.
     s.remove.run(id);
     return { deleted: true as const, plansDeleted: plans };
-  });
+  };
 
   return {
     list: () => s.list.all(),
     get: (id) => db.transaction(() => read(id))(),
     // Validation runs inside the transaction so a referenced part cannot vanish between check and write.
-    create: (input) => db.transaction(() => read(createTx(validate(input))))(),
-    update: (id, input) =>
-      db.transaction(() => {
-        updateTx(id, validate(input));
+    create: (input) => writeTx(db, () => read(createTx(validate(input)))),
+    update: (id, input, expectedUpdatedAt) =>
+      writeTx(db, () => {
+        updateTx(id, validate(input), expectedUpdatedAt);
         return read(id);
-      })(),
-    delete: (id, opts) => deleteTx(id, opts.deletePlansToo),
+      }),
+    delete: (id, opts) => writeTx(db, () => deleteTx(id, opts.deletePlansToo, opts.expectedUpdatedAt)),
     count: () => s.count.get()!.n,
   };
 }

@@ -8,8 +8,9 @@ import { createMetaRepository, type MetaRepository } from './meta.js';
 import { createPartsRepository, type PartsRepository } from './parts.js';
 import { createPlansRepository, type PlansRepository } from './plans.js';
 import { createReadingsRepository, type ReadingsRepository } from './readings.js';
-import type { CorruptRow, RepoContext } from './shared.js';
+import { writeTx, type CorruptRow, type RepoContext } from './shared.js';
 import { createTicksRepository, type TicksRepository } from './ticks.js';
+import { scanUnreadable, type UnreadableRow } from './unreadable.js';
 
 export type Repositories = {
   engines: EnginesRepository;
@@ -19,7 +20,9 @@ export type Repositories = {
   /** The ticked steps of each plan's wiring sheet. */
   ticks: TicksRepository;
   meta: MetaRepository;
-  /** Run `fn` in one transaction (nested calls become savepoints); any throw rolls all of it back. */
+  /** Every engine, part, plan and reading that no longer parses (lists leave them out), with its label, version and reason. */
+  unreadable(): UnreadableRow[];
+  /** Run `fn` in one write transaction, begun IMMEDIATE (nested calls become savepoints); any throw rolls all of it back. */
   transaction<T>(fn: () => T): T;
 };
 
@@ -33,18 +36,28 @@ export function createRepositories(db: Database.Database, options: RepositoryOpt
     db,
     onCorruptRow: options.onCorruptRow ?? ((row) => console.warn(`[store] skipped unreadable row: ${row.message}`)),
   };
+  const engines = createEnginesRepository(ctx);
+  const parts = createPartsRepository(ctx);
+  const plans = createPlansRepository(ctx);
+  const readings = createReadingsRepository(ctx);
   return {
-    engines: createEnginesRepository(ctx),
-    parts: createPartsRepository(ctx),
-    plans: createPlansRepository(ctx),
-    readings: createReadingsRepository(ctx),
+    engines,
+    parts,
+    plans,
+    readings,
     ticks: createTicksRepository(ctx),
     meta: createMetaRepository(ctx),
-    transaction: (fn) => db.transaction(fn)(),
+    unreadable: () =>
+      db.transaction(() =>
+        scanUnreadable(ctx, { engines: (id) => engines.get(id), parts: (id) => parts.get(id), plans: (id) => plans.get(id), readings: (id) => readings.get(id) }),
+      )(),
+    transaction: (fn) => writeTx(db, fn),
   };
 }
 
 export type { CorruptRow } from './shared.js';
+export type { UnreadableRow, UnreadableTable } from './unreadable.js';
+export { UNREADABLE_TABLES } from './unreadable.js';
 export type { EngineSummary, EnginesRepository } from './engines.js';
 export type { PartsRepository } from './parts.js';
 export type { PlansRepository } from './plans.js';

@@ -4,21 +4,22 @@
  */
 import { part as partSchema, partInput, partKind, type Part, type PartInput, type PartKind } from '../schema.js';
 import { StoreError } from '../errors.js';
-import { INVALID_SENTENCE, nowIso, parseInput, parseJsonColumn, parseStored, plural, readAll, type RepoContext } from './shared.js';
+import { checkVersion, INVALID_SENTENCE, nextStamp, nowIso, parseInput, parseJsonColumn, parseStored, plural, readAll, writeTx, type RepoContext } from './shared.js';
 
 export type PartsRepository = {
   list(kind?: PartKind): Part[];
   get(id: number): Part;
   create(input: PartInput): Part;
-  update(id: number, input: PartInput): Part;
-  /** Refused with IN_USE while a plan or an engine's existing setup refers to the part. */
-  delete(id: number): { deleted: true };
+  /** STALE if the part changed since `expectedUpdatedAt` (the `updatedAt` the user saw). */
+  update(id: number, input: PartInput, expectedUpdatedAt: string): Part;
+  /** Refused with IN_USE while a plan or an engine's existing setup refers to the part; STALE as update. Works on a row that no longer parses. */
+  delete(id: number, expectedUpdatedAt: string): { deleted: true };
   /** The first part of this kind with exactly this name (after trimming), or null. */
   findByName(kind: PartKind, name: string): Part | null;
   count(): number;
 };
 
-type PartRow = { id: number; kind: string; name: string; notes: string; data: string };
+type PartRow = { id: number; kind: string; name: string; notes: string; data: string; updated_at: string };
 
 /** The parts of an engine's existing setup live in its JSON; these are the keys that name a part. */
 const EXISTING_PART_KEYS = ['coilPartId', 'ballastPartId', 'tachPartId', 'leadsPartId', 'plugPartId'] as const;
@@ -30,7 +31,7 @@ function splitPart(p: PartInput): { kind: PartKind; name: string; notes: string;
 
 export function createPartsRepository(ctx: RepoContext): PartsRepository {
   const { db } = ctx;
-  const select = 'SELECT id, kind, name, notes, data FROM parts';
+  const select = 'SELECT id, kind, name, notes, data, updated_at FROM parts';
   const s = {
     all: db.prepare<[], PartRow>(`${select} ORDER BY kind, name COLLATE NOCASE, id`),
     byKind: db.prepare<[string], PartRow>(`${select} WHERE kind = ? ORDER BY name COLLATE NOCASE, id`),
@@ -54,7 +55,7 @@ export function createPartsRepository(ctx: RepoContext): PartsRepository {
     const data = parseJsonColumn('parts', row.id, 'data', row.data);
     const spread = typeof data === 'object' && data !== null ? data : {};
     // Columns win over anything of the same name inside `data`.
-    return parseStored(partSchema, 'parts', row.id, { ...spread, kind: row.kind, name: row.name, notes: row.notes, id: row.id });
+    return parseStored(partSchema, 'parts', row.id, { ...spread, kind: row.kind, name: row.name, notes: row.notes, id: row.id, updatedAt: row.updated_at });
   }
 
   function read(id: number): Part {
@@ -72,20 +73,24 @@ export function createPartsRepository(ctx: RepoContext): PartsRepository {
     return out;
   }
 
-  const deleteTx = db.transaction((id: number) => {
-    const current = read(id);
+  // Reads the raw row only (never parses `data`), so a part that no longer parses can still be deleted.
+  const deleteTx = (id: number, expected: string) => {
+    const current = s.get.get(id);
+    if (!current) throw new StoreError('NOT_FOUND', `There is no part with id ${id}; it may have been deleted.`);
+    checkVersion('part', id, current.updated_at, expected, true);
     const usedBy = users(id);
     if (usedBy.length > 0) {
       throw new StoreError('IN_USE', `"${current.name}" is used by ${usedBy.join(' and ')}. Take it out of those first, then delete it.`);
     }
     s.remove.run(id);
     return { deleted: true as const };
-  });
+  };
 
-  const updateTx = db.transaction((id: number, input: unknown) => {
-    const p = parseInput(partInput, input);
+  const updateTx = (id: number, input: unknown, expected: string) => {
     const row = s.get.get(id);
     if (!row) throw new StoreError('NOT_FOUND', `There is no part with id ${id}; it may have been deleted.`);
+    checkVersion('part', id, row.updated_at, expected, false);
+    const p = parseInput(partInput, input);
     if (row.kind !== p.kind) {
       // A plan's coil_id must keep naming a coil; changing the kind under it would make it lie.
       const usedBy = users(id);
@@ -93,9 +98,9 @@ export function createPartsRepository(ctx: RepoContext): PartsRepository {
         throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, { kind: `This part is used by ${usedBy.join(' and ')}, so its kind cannot change.` });
       }
     }
-    s.update.run({ ...splitPart(p), now: nowIso(), id });
+    s.update.run({ ...splitPart(p), now: nextStamp(row.updated_at), id });
     return read(id);
-  });
+  };
 
   return {
     list: (kind) => {
@@ -104,12 +109,12 @@ export function createPartsRepository(ctx: RepoContext): PartsRepository {
     },
     get: (id) => read(id),
     create: (input) =>
-      db.transaction(() => {
+      writeTx(db, () => {
         const p = parseInput(partInput, input);
         return read(Number(s.insert.run({ ...splitPart(p), now: nowIso() }).lastInsertRowid));
-      })(),
-    update: (id, input) => updateTx(id, input),
-    delete: (id) => deleteTx(id),
+      }),
+    update: (id, input, expectedUpdatedAt) => writeTx(db, () => updateTx(id, input, expectedUpdatedAt)),
+    delete: (id, expectedUpdatedAt) => writeTx(db, () => deleteTx(id, expectedUpdatedAt)),
     findByName: (kind, name) => {
       const row = s.byName.get(kind, name.trim());
       return row ? fromRow(row) : null;

@@ -5,19 +5,23 @@
 import { z } from 'zod';
 import { plan as planSchema, planInput, planStatus, type Plan, type PlanInput, type PlanStatus, type PlanUpdateInput } from '../schema.js';
 import { StoreError } from '../errors.js';
-import { INVALID_SENTENCE, nowIso, parseInput, parseStored, partRefChecker, readAll, type RepoContext } from './shared.js';
+import { checkVersion, INVALID_SENTENCE, nextStamp, nowIso, parseInput, parseStored, partRefChecker, readAll, writeTx, type RepoContext } from './shared.js';
 
 export type PlansRepository = {
   /** Every plan, or one engine's (NOT_FOUND if that engine does not exist). */
   list(engineId?: number): Plan[];
   get(id: number): Plan;
   create(input: PlanInput): Plan;
-  /** Without a status in `input`, the stored status stays. */
-  update(id: number, input: PlanUpdateInput): Plan;
-  /** Sets the status alone (by hand in any direction, or moved forward by the work on the sheet). */
+  /** Without a status in `input`, the stored status stays. STALE if the plan changed since `expectedUpdatedAt`. */
+  update(id: number, input: PlanUpdateInput, expectedUpdatedAt: string): Plan;
+  /**
+   * Sets the status alone (by hand in any direction, or moved forward by the work on the sheet). It
+   * leaves `updatedAt` as it was: that is the version of the fields an editor writes, and an editor
+   * never writes the status, so weighing a plan does not make an open editor stale.
+   */
   setStatus(id: number, status: PlanStatus): Plan;
-  /** Deletes the plan and its readings together. */
-  delete(id: number): { deleted: true; readingsDeleted: number };
+  /** Deletes the plan and its readings together; STALE if it changed since `expectedUpdatedAt`. Works on a row that no longer parses. */
+  delete(id: number, expectedUpdatedAt: string): { deleted: true; readingsDeleted: number };
   count(): number;
 };
 
@@ -80,9 +84,10 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
     byEngine: db.prepare<[number], PlanRow>(`${select} WHERE engine_id = ? ORDER BY id`),
     get: db.prepare<[number], PlanRow>(`${select} WHERE id = ?`),
     engineExists: db.prepare<[number], { id: number }>('SELECT id FROM engines WHERE id = ?'),
+    version: db.prepare<[number], { updated_at: string }>('SELECT updated_at FROM plans WHERE id = ?'),
     insert: db.prepare(`INSERT INTO plans (${COLUMNS}, created_at, updated_at) VALUES (${PARAMS}, @now, @now)`),
     update: db.prepare(`UPDATE plans SET (${COLUMNS}, updated_at) = (${PARAMS}, @now) WHERE id = @id`),
-    setStatus: db.prepare('UPDATE plans SET status = @status, updated_at = @now WHERE id = @id'),
+    setStatus: db.prepare('UPDATE plans SET status = @status WHERE id = @id'),
     readingCount: db.prepare<[number], { n: number }>('SELECT COUNT(*) AS n FROM readings WHERE plan_id = ?'),
     remove: db.prepare('DELETE FROM plans WHERE id = ?'),
     count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM plans'),
@@ -111,12 +116,22 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
     return { ...p, crankingBypass: p.crankingBypass ? 1 : 0, coilWiring: p.coilWiring ?? 'as-marked-for-earth', now: nowIso() };
   }
 
-  const deleteTx = db.transaction((id: number) => {
-    read(id);
+  const notFound = (id: number) => new StoreError('NOT_FOUND', `There is no plan with id ${id}; it may have been deleted.`);
+
+  /** The stored version, checked against the one the user saw; read without parsing the row. */
+  function versionOf(id: number, expected: string, deleting: boolean): string {
+    const stored = st().version.get(id);
+    if (!stored) throw notFound(id);
+    checkVersion('plan', id, stored.updated_at, expected, deleting);
+    return stored.updated_at;
+  }
+
+  const deleteTx = (id: number, expected: string) => {
+    versionOf(id, expected, true);
     const readingsDeleted = st().readingCount.get(id)!.n;
     st().remove.run(id); // readings.plan_id cascades
     return { deleted: true as const, readingsDeleted };
-  });
+  };
 
   return {
     list: (engineId) => {
@@ -125,22 +140,23 @@ export function createPlansRepository(ctx: RepoContext): PlansRepository {
       return readAll(ctx, 'plans', st().byEngine.all(engineId), fromRow);
     },
     get: (id) => read(id),
-    create: (input) => db.transaction(() => read(Number(st().insert.run(validate(input)).lastInsertRowid)))(),
-    update: (id, input) =>
-      db.transaction(() => {
+    create: (input) => writeTx(db, () => read(Number(st().insert.run(validate(input)).lastInsertRowid))),
+    update: (id, input, expectedUpdatedAt) =>
+      writeTx(db, () => {
+        const previous = versionOf(id, expectedUpdatedAt, false);
         const stored = read(id);
         const withStatus = typeof input === 'object' && input !== null && (input as { status?: unknown }).status === undefined ? { ...input, status: stored.status } : input;
-        st().update.run({ ...validate(withStatus), id });
+        st().update.run({ ...validate(withStatus), now: nextStamp(previous), id });
         return read(id);
-      })(),
+      }),
     setStatus: (id, status) =>
-      db.transaction(() => {
+      writeTx(db, () => {
         const { status: s2 } = parseInput(statusOnly, { status });
         read(id);
-        st().setStatus.run({ status: s2, now: nowIso(), id });
+        st().setStatus.run({ status: s2, id });
         return read(id);
-      })(),
-    delete: (id) => deleteTx(id),
+      }),
+    delete: (id, expectedUpdatedAt) => writeTx(db, () => deleteTx(id, expectedUpdatedAt)),
     count: () => st().count.get()!.n,
   };
 }

@@ -5,20 +5,21 @@
  */
 import { reading as readingSchema, readingInput, toStoredUnit, type Reading, type ReadingInput } from '../schema.js';
 import { StoreError } from '../errors.js';
-import { INVALID_SENTENCE, nowIso, parseInput, parseStored, readAll, type RepoContext } from './shared.js';
+import { checkVersion, INVALID_SENTENCE, nextStamp, nowIso, parseInput, parseStored, readAll, writeTx, type RepoContext } from './shared.js';
 
 export type ReadingsRepository = {
   /** NOT_FOUND if the plan does not exist. Oldest first. */
   list(planId: number): Reading[];
   get(id: number): Reading;
   add(input: ReadingInput): Reading;
-  /** Replaces a reading's quantity, value, unit, date and note; it stays with its plan. */
-  update(id: number, input: ReadingInput): Reading;
-  delete(id: number): { deleted: true };
+  /** Replaces a reading's quantity, value, unit, date and note; it stays with its plan. STALE if it changed since `expectedUpdatedAt`. */
+  update(id: number, input: ReadingInput, expectedUpdatedAt: string): Reading;
+  /** STALE as update; works on a row that no longer parses. Answers the plan it belonged to. */
+  delete(id: number, expectedUpdatedAt: string): { deleted: true; planId: number };
   count(): number;
 };
 
-type ReadingRow = { id: number; plan_id: number; quantity: string; value: number; unit: string; taken_on: string; note: string };
+type ReadingRow = { id: number; plan_id: number; quantity: string; value: number; unit: string; taken_on: string; note: string; updated_at: string };
 
 function fromRow(row: ReadingRow): Reading {
   return parseStored(readingSchema, 'readings', row.id, {
@@ -29,6 +30,7 @@ function fromRow(row: ReadingRow): Reading {
     unit: row.unit,
     takenOn: row.taken_on,
     note: row.note,
+    updatedAt: row.updated_at,
   });
 }
 
@@ -43,56 +45,64 @@ function validate(input: unknown): ReadingInput {
 
 export function createReadingsRepository(ctx: RepoContext): ReadingsRepository {
   const { db } = ctx;
-  const select = 'SELECT id, plan_id, quantity, value, unit, taken_on, note FROM readings';
-  const s = {
+  const select = 'SELECT id, plan_id, quantity, value, unit, taken_on, note, updated_at FROM readings';
+  // Prepared on first use (as plans and ticks are), so repositories can be built over an older file
+  // (without readings.updated_at, before migration 004) while its migrations run.
+  let prepared: ReturnType<typeof prepare> | undefined;
+  const prepare = () => ({
     byPlan: db.prepare<[number], ReadingRow>(`${select} WHERE plan_id = ? ORDER BY taken_on, id`),
     get: db.prepare<[number], ReadingRow>(`${select} WHERE id = ?`),
     planExists: db.prepare<[number], { id: number }>('SELECT id FROM plans WHERE id = ?'),
     insert: db.prepare(
-      'INSERT INTO readings (plan_id, quantity, value, unit, taken_on, note, created_at) VALUES (@planId, @quantity, @value, @unit, @takenOn, @note, @now)',
+      'INSERT INTO readings (plan_id, quantity, value, unit, taken_on, note, created_at, updated_at) VALUES (@planId, @quantity, @value, @unit, @takenOn, @note, @now, @now)',
     ),
-    update: db.prepare('UPDATE readings SET quantity = @quantity, value = @value, unit = @unit, taken_on = @takenOn, note = @note WHERE id = @id'),
+    update: db.prepare('UPDATE readings SET quantity = @quantity, value = @value, unit = @unit, taken_on = @takenOn, note = @note, updated_at = @now WHERE id = @id'),
     remove: db.prepare('DELETE FROM readings WHERE id = ?'),
     count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM readings'),
-  };
+  });
+  const st = (): ReturnType<typeof prepare> => (prepared ??= prepare());
 
   function read(id: number): Reading {
-    const row = s.get.get(id);
+    const row = st().get.get(id);
     if (!row) throw new StoreError('NOT_FOUND', `There is no reading with id ${id}; it may have been deleted.`);
     return fromRow(row);
   }
 
   return {
     list: (planId) => {
-      if (!s.planExists.get(planId)) throw new StoreError('NOT_FOUND', `There is no plan with id ${planId}; it may have been deleted.`);
-      return readAll(ctx, 'readings', s.byPlan.all(planId), fromRow);
+      if (!st().planExists.get(planId)) throw new StoreError('NOT_FOUND', `There is no plan with id ${planId}; it may have been deleted.`);
+      return readAll(ctx, 'readings', st().byPlan.all(planId), fromRow);
     },
     get: (id) => read(id),
     add: (input) =>
-      db.transaction(() => {
+      writeTx(db, () => {
         const r = validate(input);
-        if (!s.planExists.get(r.planId)) throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, { planId: `There is no plan with id ${r.planId}.` });
-        return read(Number(s.insert.run({ ...r, now: nowIso() }).lastInsertRowid));
-      })(),
-    update: (id, input) =>
-      db.transaction(() => {
-        const row = s.get.get(id);
+        if (!st().planExists.get(r.planId)) throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, { planId: `There is no plan with id ${r.planId}.` });
+        return read(Number(st().insert.run({ ...r, now: nowIso() }).lastInsertRowid));
+      }),
+    update: (id, input, expectedUpdatedAt) =>
+      writeTx(db, () => {
+        const row = st().get.get(id);
         if (!row) throw new StoreError('NOT_FOUND', `There is no reading with id ${id}; it may have been deleted.`);
+        checkVersion('reading', id, row.updated_at, expectedUpdatedAt, false);
         const r = validate(input);
         if (r.planId !== row.plan_id) {
           throw new StoreError('INVALID_INPUT', INVALID_SENTENCE, {
             planId: `This reading belongs to plan ${row.plan_id}; a reading stays with its plan (delete it and add it to the other plan instead).`,
           });
         }
-        s.update.run({ ...r, id });
+        st().update.run({ ...r, now: nextStamp(row.updated_at), id });
         return read(id);
-      })(),
-    delete: (id) =>
-      db.transaction(() => {
-        read(id);
-        s.remove.run(id);
-        return { deleted: true as const };
-      })(),
-    count: () => s.count.get()!.n,
+      }),
+    delete: (id, expectedUpdatedAt) =>
+      writeTx(db, () => {
+        // The raw row only: a reading that no longer parses can still be deleted.
+        const row = st().get.get(id);
+        if (!row) throw new StoreError('NOT_FOUND', `There is no reading with id ${id}; it may have been deleted.`);
+        checkVersion('reading', id, row.updated_at, expectedUpdatedAt, true);
+        st().remove.run(id);
+        return { deleted: true as const, planId: row.plan_id };
+      }),
+    count: () => st().count.get()!.n,
   };
 }

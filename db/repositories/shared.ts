@@ -16,10 +16,46 @@ export type RepoContext = {
   onCorruptRow: (row: CorruptRow) => void;
 };
 
+/**
+ * Runs `fn` as a write transaction started IMMEDIATE: the write lock is taken at BEGIN, so a second
+ * process waits (busy_timeout) for it instead of failing with SQLITE_BUSY_SNAPSHOT half-way
+ * (sqlite.org/lang_transaction.html). Inside another transaction it becomes a savepoint.
+ */
+export function writeTx<T>(db: Database.Database, fn: () => T): T {
+  return db.transaction(fn).immediate();
+}
+
 export const INVALID_SENTENCE = 'Some values need correcting before this can be saved.';
 
 export function nowIso(): string {
   return new Date().toISOString();
+}
+
+/**
+ * The time a changed record gets: now, or 1 ms after its previous time if the clock has not moved
+ * past it (two saves in one millisecond, or a clock set back), so every save gives a new version.
+ */
+export function nextStamp(previous: string): string {
+  const now = nowIso();
+  if (now > previous) return now;
+  const prev = Date.parse(previous);
+  return Number.isNaN(prev) ? now : new Date(prev + 1).toISOString();
+}
+
+export type RecordWord = 'engine' | 'part' | 'plan' | 'reading';
+
+/**
+ * Refuses a write made from a stale screen: `expected` is the `updatedAt` the user saw, `stored`
+ * the row's `updated_at` now. Nothing has been written when this throws.
+ */
+export function checkVersion(what: RecordWord, id: number, stored: string, expected: string, deleting: boolean): void {
+  if (stored === expected) return;
+  throw new StoreError(
+    'STALE',
+    deleting
+      ? `This ${what} was changed somewhere else after you opened it, so it was not deleted. Reload it to see the newer version, then delete it if you still want to.`
+      : `This ${what} was changed somewhere else after you opened it, so your changes were not saved (they would have overwritten the newer ones). Reload it to see the newer version, then make your changes again.`,
+  );
 }
 
 /** Parse what a caller wants to store; anything wrong is INVALID_INPUT with one message per field. */

@@ -6,7 +6,7 @@
 import { z } from 'zod';
 import { sheetTick as sheetTickSchema, stepKey as stepKeySchema, type SheetTick } from '../schema.js';
 import { StoreError } from '../errors.js';
-import { nowIso, parseInput, parseStored, readAll, type RepoContext } from './shared.js';
+import { nowIso, parseInput, parseStored, readAll, writeTx, type RepoContext } from './shared.js';
 
 export type TicksRepository = {
   /** The plan's ticked steps, in the order they were ticked. NOT_FOUND if the plan does not exist. */
@@ -43,13 +43,13 @@ export function createTicksRepository(ctx: RepoContext): TicksRepository {
   return {
     list,
     set: (planId, stepKey, ticked) =>
-      db.transaction(() => {
+      writeTx(db, () => {
         const args = parseInput(setArgs, { stepKey, ticked });
         const s = statements();
         if (!s.planExists.get(planId)) throw new StoreError('NOT_FOUND', `There is no plan with id ${planId}; it may have been deleted.`);
         if (args.ticked) s.tick.run(planId, args.stepKey, nowIso());
         else s.untick.run(planId, args.stepKey);
         return list(planId);
-      })(),
+      }),
   };
 }

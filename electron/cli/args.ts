@@ -11,7 +11,7 @@ export interface ParsedArgs {
 }
 
 /** Options that are on or off and take no value. Every other option takes one. */
-export const SWITCHES: ReadonlySet<string> = new Set(['sweep']);
+export const SWITCHES: ReadonlySet<string> = new Set(['sweep', 'preview', 'yes', 'list']);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positionals: string[] = [];

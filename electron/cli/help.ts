@@ -17,6 +17,24 @@ Usage:
       with the terminals, the expected readings with their bands and likely causes, and the wiring
       diagram. --format html writes one printable page (styles inlined, no script). --out writes
       to FILE instead of printing.
+  npm run cli -- export --data-dir DIR [--out FILE]
+      Print the whole workshop in DIR (every engine, part, plan, reading and sheet tick) as one
+      workshop file (JSON, format "ignition-planner-workshop" version 1); --out writes it to FILE.
+  npm run cli -- import <workshop.json> --data-dir DIR [--preview]
+      Bring a workshop file into DIR (a new folder gets a new workshop), in one transaction: parts
+      matched by kind and name, engines by name, plans by name within their engine; the same record
+      is skipped, a different one under a taken name is added as "<name> (imported)". --preview
+      prints what would be added, skipped or renamed and writes nothing.
+  npm run cli -- backup --data-dir DIR [--list]
+      Back up the workshop through SQLite's online backup API into DIR/backups/ (the newest 10 and
+      the newest of each month are kept); --list prints every backup with its date and counts.
+  npm run cli -- restore <backup-name> --data-dir DIR --yes
+      Replace the workshop with a backup named as --list shows it; the current workshop is backed
+      up first. --yes confirms.
+  npm run cli -- parts-csv export --kind KIND --data-dir DIR [--out FILE]
+  npm run cli -- parts-csv import <parts.csv> --kind KIND --data-dir DIR [--preview]
+      The parts of one kind (coil, ballast, module, tach, leads or plug) as CSV with the units in the
+      headers; an import is all or nothing, every bad cell named as "row N, column: why".
   npm run cli -- --help
 
 Files are described in README.md (section "Command line"); an example is test/fixtures/plan-example.json.

@@ -154,7 +154,7 @@ function buildEngine(rawEngine: Record<string, unknown>, existing: Engine['exist
     );
     return null;
   }
-  return { ...parsed.data, id: 1 };
+  return { ...parsed.data, id: 1, updatedAt: new Date(0).toISOString() };
 }
 
 function buildExisting(x: z.infer<typeof existingFile>, list: PartList, problems: string[]): Engine['existing'] {

@@ -11,8 +11,18 @@ import { serveStatic } from './static-files.js';
 
 export type HostServerOptions = { token: string; dispatch: Dispatch; staticRoot: string; onError?: (err: unknown) => void };
 
+/**
+ * Node checks the header and request timeouts only on a timer (`connectionsCheckingInterval`,
+ * default 30 s, nodejs.org/api/http.html#httpcreateserveroptions-requestlistener), so a client that
+ * sends its headers slowly was cut off only after about 30 s, not 10. Checked every second here.
+ */
+export const HEADERS_TIMEOUT_MS = 10_000;
+export const REQUEST_TIMEOUT_MS = 30_000;
+export const CONNECTIONS_CHECKING_INTERVAL_MS = 1_000;
+
 export function createHostServer({ token, dispatch, staticRoot, onError = () => {} }: HostServerOptions): Server {
-  const server = createServer((req, res) => {
+  const options = { headersTimeout: HEADERS_TIMEOUT_MS, requestTimeout: REQUEST_TIMEOUT_MS, connectionsCheckingInterval: CONNECTIONS_CHECKING_INTERVAL_MS };
+  const server = createServer(options, (req, res) => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : -1;
     if (!isAllowedHost(req.headers.host, port)) {
@@ -36,7 +46,7 @@ export function createHostServer({ token, dispatch, staticRoot, onError = () => 
     }
     serveStatic(req, res, staticRoot);
   });
-  server.headersTimeout = 10_000;
-  server.requestTimeout = 30_000;
+  server.headersTimeout = HEADERS_TIMEOUT_MS;
+  server.requestTimeout = REQUEST_TIMEOUT_MS;
   return server;
 }

@@ -8,12 +8,20 @@ import { z } from 'zod';
 import { engine, engineInput, part, partInput, partKind, plan, planInput, planUpdateInput, planStatus, reading, readingInput, stepKey } from '../../db/schema.js';
 import { checkPlansRequest, checkSearchRequest, comparisonAnswer, searchAnswer } from './check-shapes.js';
 import { printAnswer, printRequest, sheetAnswerFields } from './sheet-shapes.js';
+import { recordsChannels } from './records-shapes.js';
 
 export * from './check-shapes.js';
 export * from './sheet-shapes.js';
+export * from './records-shapes.js';
 
 const id = z.number().int().positive();
 const byId = z.object({ id });
+/**
+ * The `updatedAt` of the record as the screen showed it. Every update and delete carries it; if the
+ * record changed since, the answer is STALE and nothing is written (the screen offers to reload).
+ */
+const expectedUpdatedAt = z.string({ error: 'Send the updatedAt of the record as it was shown.' }).min(1, 'Send the updatedAt of the record as it was shown.');
+const byIdAt = z.object({ id, expectedUpdatedAt });
 
 export const engineSummary = z.object({
   id,
@@ -24,6 +32,7 @@ export const engineSummary = z.object({
   systemVoltageV: z.number(),
   earthPolarity: z.string(),
   planCount: z.number().int().min(0),
+  updatedAt: z.string(),
 });
 
 /** What 'sheet.get' and 'sheet.tick' answer: the sheet, its ticks, the plan's readings judged, the progress and the status. */
@@ -42,30 +51,40 @@ export const channels = {
   'engines.list': { request: z.object({}), response: z.array(engineSummary) },
   'engines.get': { request: byId, response: engine },
   'engines.create': { request: z.object({ engine: engineInput }), response: engine },
-  'engines.update': { request: z.object({ id, engine: engineInput }), response: engine },
+  'engines.update': { request: z.object({ id, expectedUpdatedAt, engine: engineInput }), response: engine },
   /** Refused with IN_USE while plans use the engine, unless the user has confirmed the cascade. */
   'engines.delete': {
-    request: z.object({ id, deletePlansToo: z.boolean() }),
+    request: z.object({ id, expectedUpdatedAt, deletePlansToo: z.boolean() }),
     response: z.object({ deleted: z.literal(true), plansDeleted: z.number().int() }),
   },
   'parts.list': { request: z.object({ kind: partKind.optional() }), response: z.array(part) },
   'parts.get': { request: byId, response: part },
   'parts.create': { request: z.object({ part: partInput }), response: part },
-  'parts.update': { request: z.object({ id, part: partInput }), response: part },
-  'parts.delete': { request: byId, response: z.object({ deleted: z.literal(true) }) },
+  'parts.update': { request: z.object({ id, expectedUpdatedAt, part: partInput }), response: part },
+  'parts.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true) }) },
   'plans.list': { request: z.object({ engineId: id.optional() }), response: z.array(plan) },
   'plans.get': { request: byId, response: plan },
   'plans.create': { request: z.object({ plan: planInput }), response: plan },
   /** The status may be left out: then the stored one stays (it moves by 'plans.setStatus' and the work). */
-  'plans.update': { request: z.object({ id, plan: planUpdateInput }), response: plan },
-  'plans.delete': { request: byId, response: z.object({ deleted: z.literal(true), readingsDeleted: z.number().int() }) },
+  'plans.update': { request: z.object({ id, expectedUpdatedAt, plan: planUpdateInput }), response: plan },
+  'plans.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), readingsDeleted: z.number().int() }) },
   'readings.list': { request: z.object({ planId: id }), response: z.array(reading) },
   'readings.add': { request: z.object({ reading: readingInput }), response: reading },
-  'readings.delete': { request: byId, response: z.object({ deleted: z.literal(true) }) },
+  'readings.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true) }) },
   /** A reading corrected: converted to its quantity's unit like 'readings.add'; it stays with its plan. */
-  'readings.update': { request: z.strictObject({ id, reading: readingInput }), response: reading },
+  'readings.update': { request: z.strictObject({ id, expectedUpdatedAt, reading: readingInput }), response: reading },
   /** The status set by hand, in any direction (the work on the sheet only ever moves it forward). */
   'plans.setStatus': { request: z.strictObject({ id, status: planStatus }), response: plan },
+  /**
+   * The engines, parts, plans and readings that no longer parse (lists leave them out): each with a
+   * label, its version (for the delete request) and the reason. The screen says how many and offers to remove each.
+   */
+  'store.unreadable': {
+    request: z.strictObject({}),
+    response: z.object({
+      rows: z.array(z.object({ table: z.enum(['engines', 'parts', 'plans', 'readings']), id, label: z.string(), updatedAt: z.string(), message: z.string() })),
+    }),
+  },
   /** A plan's wiring sheet with its ticks, readings and progress. */
   'sheet.get': { request: z.strictObject({ planId: id }), response: sheetAnswer },
   /** Ticks or unticks one step of the plan's sheet; the status moves forward if the work reached 'wired' or 'done'. */
@@ -74,8 +93,14 @@ export const channels = {
   'app.print': { request: printRequest, response: printAnswer },
   /** The engine's existing setup beside up to three of its plans, judged rule by rule. */
   'check.plans': { request: checkPlansRequest, response: comparisonAnswer },
-  /** The best combinations of module, coil and ballast from the whole parts bin for one engine. */
+  /** The best combinations of module, coil and ballast from the whole parts bin for one engine (in a worker thread). */
   'check.search': { request: checkSearchRequest, response: searchAnswer },
+  /** Stops every running search; each answers CANCELLED. */
+  'check.cancel': { request: z.strictObject({}), response: z.object({ cancelled: z.number().int().min(0) }) },
+  /** How many searches are running and for how long the oldest has run (ms). */
+  'check.progress': { request: z.strictObject({}), response: z.object({ running: z.number().int().min(0), elapsedMs: z.number().min(0) }) },
+  /** Backups, the workshop file and the parts lists as CSV (records-shapes.ts). */
+  ...recordsChannels,
 } as const;
 
 export type Channels = typeof channels;
@@ -87,9 +112,11 @@ export const errorCodes = [
   'INVALID_INPUT', // the request did not match its schema; `fields` says which and why
   'NOT_FOUND', // the id names nothing in the store
   'IN_USE', // deleting would orphan something; the user must confirm or move it first
+  'STALE', // the record changed since the screen read it; nothing was written; offer to reload
   'UNKNOWN_CHANNEL', // no such request in the map
   'STORE_ERROR', // the database refused the write; nothing was changed
   'UNSUPPORTED', // the request needs the desktop shell (printing, for example)
+  'CANCELLED', // the person stopped a long request (a search); nothing was changed
   'INTERNAL', // a fault of ours; the message says what to report
 ] as const;
 export type ErrorCode = (typeof errorCodes)[number];

@@ -7,7 +7,7 @@
  */
 import type { Part, Plan, Reading } from '../../db/schema.js';
 import type { Repositories } from '../../db/repositories/index.js';
-import { compareSetups, searchBest, CheckerInputError } from '../checker/index.js';
+import { compareSetups, searchBest, CheckerInputError, type SearchInput, type SearchResult } from '../checker/index.js';
 import { ignitionCautions } from '../safety/cautions.js';
 import { comparisonInput, latestReading, searchInput, SetupAdapterError } from '../setup/index.js';
 import type { ComparisonAnswer, SearchAnswer, ShownFigure } from './check-shapes.js';
@@ -65,7 +65,15 @@ function planNameOf(label: string): string {
   return t.length <= 120 ? t : `${t.slice(0, 119).trimEnd()}…`;
 }
 
-export function searchShelf(repos: Repositories, req: { engineId: number; top?: number | undefined }): SearchAnswer {
+/**
+ * `run` does the search itself: in the app a worker thread (search-runner.ts), so every other
+ * request keeps answering meanwhile; by default in this thread (the command line, tests of the answer).
+ */
+export async function searchShelf(
+  repos: Repositories,
+  req: { engineId: number; top?: number | undefined },
+  run: (input: SearchInput) => Promise<SearchResult> = async (input) => searchBest(input),
+): Promise<SearchAnswer> {
   const engine = repos.engines.get(req.engineId);
   const parts: Part[] = repos.parts.list();
   // The same order searchInput uses, so the search's indices name these parts.
@@ -75,9 +83,16 @@ export function searchShelf(repos: Repositories, req: { engineId: number; top?: 
   const tachs = parts.filter((p) => p.kind === 'tach');
   const leadsParts = parts.filter((p) => p.kind === 'leads');
   const plugs = parts.filter((p) => p.kind === 'plug');
+  const input = adapting(() => searchInput(engine, parts, req.top ?? 5));
+  let result: SearchResult;
+  try {
+    result = await run(input);
+  } catch (err) {
+    return adapting(() => {
+      throw err;
+    });
+  }
   return adapting(() => {
-    const input = searchInput(engine, parts, req.top ?? 5);
-    const result = searchBest(input);
     const titles = new Map<string, string>();
     for (const t of result.top) for (const r of t.report.rules) titles.set(r.id, r.title);
     const margin = result.top[0]?.report.inputs.find((f) => f.name === 'marginRatio')?.value ?? 1.25;

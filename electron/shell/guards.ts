@@ -31,7 +31,8 @@ export function navigationVerdict(url: unknown, appUrl: string): Verdict {
     return 'deny';
   }
   if (target.protocol !== app.protocol || target.username !== '' || target.password !== '') return 'deny';
-  if (app.protocol === 'file:') {
+  // file: and the app's own scheme (app://ignition/...): the exact host and file, no query.
+  if (app.protocol !== 'http:' && app.protocol !== 'https:') {
     return target.host === app.host && target.pathname === app.pathname && target.search === '' ? 'allow' : 'deny';
   }
   return target.origin === app.origin && target.pathname === app.pathname ? 'allow' : 'deny';

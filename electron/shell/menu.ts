@@ -9,7 +9,8 @@ import type { MenuItemConstructorOptions } from 'electron';
 export const menuActions = ['print-to-pdf', 'print-to-pdf-letter', 'load-demo'] as const;
 export type MenuAction = (typeof menuActions)[number];
 
-export function menuTemplate(onAction: (action: MenuAction) => void, platform: string = process.platform): MenuItemConstructorOptions[] {
+/** `devTools`: a development run (window-options.ts `devToolsWanted`); only then does View offer DevTools. */
+export function menuTemplate(onAction: (action: MenuAction) => void, platform: string = process.platform, devTools = false): MenuItemConstructorOptions[] {
   const isMac = platform === 'darwin';
   const fileMenu: MenuItemConstructorOptions = {
     label: 'File',
@@ -42,8 +43,7 @@ export function menuTemplate(onAction: (action: MenuAction) => void, platform: s
       { role: 'zoomOut' },
       { type: 'separator' },
       { role: 'togglefullscreen' },
-      { type: 'separator' },
-      { role: 'toggleDevTools' },
+      ...(devTools ? [{ type: 'separator' as const }, { role: 'toggleDevTools' as const }] : []),
     ],
   };
   const appMenu: MenuItemConstructorOptions[] = isMac

@@ -1,6 +1,7 @@
 /**
- * Who may talk to the main process: only the app's own page. In the packaged app that is the
- * file:// URL of the built index.html; anything else (another file, a remote page, a data: URL, a
+ * Who may talk to the main process: only the app's own page. In the packaged app that is
+ * app://ignition/index.html (shell/app-protocol.ts; a file: page is checked the same way); anything
+ * else (another file, a remote page, a data: URL, a
  * page that somehow navigated away) is not ours and its messages are ignored.
  */
 export function isTrustedSender(frameUrl: unknown, appUrl: string): boolean {
@@ -14,7 +15,7 @@ export function isTrustedSender(frameUrl: unknown, appUrl: string): boolean {
     return false;
   }
   if (frame.protocol !== app.protocol) return false;
-  if (app.protocol === 'file:') {
+  if (app.protocol !== 'http:' && app.protocol !== 'https:') {
     // file: URLs have an opaque origin, so compare the exact file instead; the hash is the
     // renderer's own screen routing and may differ. A query string is never used by the app.
     return frame.host === app.host && frame.pathname === app.pathname && frame.search === '';

@@ -8,9 +8,20 @@ export type WindowOptionsInput = {
   /** Absolute path of the bundled preload (dist-electron/preload.cjs). */
   preloadPath: string;
   title: string;
+  /** DevTools: only in a development run (`devToolsWanted`); off in every release build. */
+  devTools?: boolean;
 };
 
-export function windowOptions({ preloadPath, title }: WindowOptionsInput): BrowserWindowConstructorOptions {
+/**
+ * Whether this run is a development run that may open DevTools: the `--dev-tools` switch or
+ * IGNITION_DEV_TOOLS=1. Nothing else turns them on (Electron's security checklist: DevTools give
+ * whoever sits at the machine the bridge to the store).
+ */
+export function devToolsWanted(argv: readonly string[], env: Record<string, string | undefined>): boolean {
+  return argv.includes('--dev-tools') || env['IGNITION_DEV_TOOLS'] === '1';
+}
+
+export function windowOptions({ preloadPath, title, devTools = false }: WindowOptionsInput): BrowserWindowConstructorOptions {
   return {
     title,
     width: 1280,
@@ -34,7 +45,7 @@ export function windowOptions({ preloadPath, title }: WindowOptionsInput): Brows
       experimentalFeatures: false,
       navigateOnDragDrop: false,
       spellcheck: false,
-      devTools: true,
+      devTools,
       safeDialogs: true,
     },
   };

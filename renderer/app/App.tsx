@@ -8,6 +8,7 @@ import type { ResponseOf } from '../../electron/ipc/channels.js';
 import { EngineEditor } from '../screens/engines/EngineEditor.js';
 import { EngineList } from '../screens/engines/EngineList.js';
 import { PartsScreen } from '../screens/parts/PartsScreen.js';
+import { RecordsScreen } from '../screens/records/RecordsScreen.js';
 import { SheetScreen } from '../screens/sheet/SheetScreen.js';
 import { WeighScreen } from '../screens/weigh/WeighScreen.js';
 import { loadBenchPlan, saveBenchPlan, type BenchPlan } from './bench-plan.js';
@@ -19,6 +20,7 @@ import { LeaveGuardContext, type LeaveCheck, type LeaveGuard } from './leave-gua
 import { Notice, type NoticeKind } from './Notice.js';
 import { screenOf, screens, type Route } from './routes.js';
 import { UnitToggle } from './UnitToggle.js';
+import { Unreadable } from './Unreadable.js';
 
 type Flash = { kind: NoticeKind; text: string } | null;
 
@@ -138,6 +140,9 @@ export function App(): ReactNode {
     case 'sheet':
       screen = <SheetScreen planId={route.planId ?? null} current={current} bench={bench} onEngineChosen={setCurrent} onPlanChosen={setBench} navigate={navigate} />;
       break;
+    case 'records':
+      screen = <RecordsScreen onChanged={() => setListVersion((v) => v + 1)} />;
+      break;
   }
 
   return (
@@ -200,6 +205,7 @@ export function App(): ReactNode {
                 {flash.text}
               </Notice>
             ) : null}
+            <Unreadable version={listVersion} onChanged={() => setListVersion((v) => v + 1)} />
             {screen}
           </main>
         </div>

@@ -15,11 +15,22 @@ export function UnsavedBadge({ testId }: { testId: string }): ReactNode {
   );
 }
 
-/** The status line; a refused save lists every message, each a button to its field. */
-export function EditorStatus({ status, summary, onDismiss }: { status: SaveStatus; summary: Messages; onDismiss: () => void }): ReactNode {
+/**
+ * The status line; a refused save lists every message, each a button to its field. A save refused
+ * because the record changed elsewhere offers to reload the saved version (`onReload`).
+ */
+export function EditorStatus({ status, summary, onDismiss, onReload }: { status: SaveStatus; summary: Messages; onDismiss: () => void; onReload?: () => void }): ReactNode {
   return (
     <Notice kind={status.kind} onDismiss={onDismiss} testId="editor-status">
       {status.text}
+      {status.stale && onReload ? (
+        <>
+          {' '}
+          <button type="button" onClick={onReload} data-testid="reload-record">
+            Reload the saved version
+          </button>
+        </>
+      ) : null}
       {Object.keys(summary).length > 0 ? (
         <ul className="error-summary">
           {Object.entries(summary).map(([path, message]) => (

@@ -5,7 +5,8 @@
  */
 import { useState } from 'react';
 
-export type DeleteTarget = { id: number; name: string };
+/** `updatedAt`: the version the screen shows, sent with the delete so a changed record is not removed. */
+export type DeleteTarget = { id: number; name: string; updatedAt: string };
 
 export function useDeleteSteps<Later extends { step: string }>() {
   const [target, setTarget] = useState<DeleteTarget | null>(null);

@@ -12,7 +12,8 @@ export type Messages = Record<string, string>;
 /** What a form's own check answers: the input ready to send, or messages keyed by schema path. */
 export type Checked<I> = { ok: true; input: I } | { ok: false; errors: Messages };
 /** The editor's status line. */
-export type SaveStatus = { kind: 'done' | 'problem'; text: string };
+/** `stale`: the store refused the save because the record changed elsewhere (STALE); the editor offers to reload. */
+export type SaveStatus = { kind: 'done' | 'problem'; text: string; stale?: boolean };
 
 /** Field keys from the store are relative to the request (`engine.boreMm`); the form's are not. */
 export function withoutPrefix(fields: Messages | undefined, prefix: string): Messages {
@@ -48,8 +49,8 @@ type SaveSteps<I, V> = {
   /** The request's key for the form's fields in the store's answer: "engine", "part", "plan". */
   serverPrefix: string;
   send: (input: I) => Promise<Result<V>>;
-  /** Shows a problem sentence in the editor's status line. */
-  problem: (text: string) => void;
+  /** Shows a problem sentence in the editor's status line; `code` is the store's error code when it refused the save. */
+  problem: (text: string, code?: string) => void;
   saved: (value: V) => void;
 };
 
@@ -82,7 +83,7 @@ export function useFormSave(clientErrors: Messages, heading: RefObject<HTMLEleme
     if (!r.ok) {
       const fields = withoutPrefix(r.error.fields, steps.serverPrefix);
       setServerErrors(fields);
-      steps.problem(`Not saved: ${r.error.message} Everything you typed is still here.`);
+      steps.problem(`Not saved: ${r.error.message} Everything you typed is still here.`, r.error.code);
       return focusFirstError(fields, heading, order);
     }
     steps.saved(r.value);

@@ -7,7 +7,8 @@ export type Route =
   | { to: 'new-engine' }
   | { to: 'parts'; part?: { id: number } | { newKind: PartKind } }
   | { to: 'combination' }
-  | { to: 'sheet'; planId?: number };
+  | { to: 'sheet'; planId?: number }
+  | { to: 'records' };
 
 export type Navigate = (route: Route) => void;
 
@@ -17,6 +18,7 @@ export const screens = [
   { to: 'parts', label: 'Parts on the shelf' },
   { to: 'combination', label: 'Weigh a combination' },
   { to: 'sheet', label: 'Wiring sheet' },
+  { to: 'records', label: 'Records and backups' },
 ] as const;
 
 export function screenOf(route: Route): (typeof screens)[number]['to'] {

@@ -14,6 +14,7 @@ const storedEngine: Engine = engineSchema.parse({
   pointsFloatRpm: null, staticTimingDegBtdc: 8, advanceCurve: [{ rpm: 1000, advanceDeg: 0 }, { rpm: 3500, advanceDeg: 22 }],
   existing: { trigger: 'points', coilPartId: 10, ballast: 'none', ballastPartId: null, crankingBypass: false, condenserUf: 0.22, tachPartId: 40, leadsPartId: 50, plugPartId: 60, plugGapMm: 0.64 },
   conditions: { crankingSupplyV: 9.1, ambientC: -1 },
+  updatedAt: '2024-05-01T00:00:00.000Z',
 });
 const parts: Part[] = [
   { id: 10, kind: 'coil', name: 'Standard coil', notes: '', primaryResistanceOhm20C: 3.2, primaryInductanceH: 0.008, secondaryResistanceOhm: 8500, turnsRatio: 95, secondaryInductanceH: null, forBallast: false, ratedVoltageV: 12, maxDissipationW: null },
@@ -24,13 +25,13 @@ const parts: Part[] = [
   { id: 40, kind: 'tach', name: 'Dash tach', notes: '', senses: 'coil-negative-pulses' },
   { id: 50, kind: 'leads', name: 'Carbon leads', notes: '', core: 'carbon', resistancePerLeadOhm: 6000 },
   { id: 60, kind: 'plug', name: 'Plug', notes: '', resistor: false, resistorOhm: 0, gapMinMm: 0.6, gapMaxMm: 0.9 },
-].map((p) => partSchema.parse(p));
+].map((p) => partSchema.parse({ ...p, updatedAt: '2024-05-01T00:00:00.000Z' }));
 const plan: Plan = planSchema.parse({ id: 5, engineId: 1, name: 'Limiter conversion', notes: '', status: 'draft', moduleId: 30, coilId: 11, ballastId: null, crankingBypass: false, moduleFeed: 'switched-15', tachId: null, leadsId: null, plugId: null, plugGapMm: 0.7, updatedAt: '2024-05-01' });
 const readings: Reading[] = [
   { id: 1, planId: 5, quantity: 'coil-primary-resistance', value: 1.38, unit: 'ohm', takenOn: '2024-05-02', note: '' },
   { id: 2, planId: 5, quantity: 'coil-primary-resistance', value: 1.41, unit: 'ohm', takenOn: '2024-05-03', note: 'second meter' },
   { id: 3, planId: 5, quantity: 'supply-voltage-cranking', value: 9.3, unit: 'V', takenOn: '2024-05-03', note: '' },
-].map((r) => readingSchema.parse(r));
+].map((r) => readingSchema.parse({ ...r, updatedAt: '2024-05-03T00:00:00.000Z' }));
 
 describe('setup adapter', () => {
   it('converts millimetres to metres and keeps the engine figures', () => {

@@ -53,7 +53,7 @@ describe('the merged "what to do" list', () => {
     demoPlans.forEach((dp, i) => {
       const plan = w.plans[i]!;
       const engine = w.engines.find((e) => e.id === plan.engineId)!;
-      const readings: Reading[] = resolveDemoPlan(dp, engine.id, () => null).readings.map((x) => ({ ...x, planId: plan.id, id: id++ }));
+      const readings: Reading[] = resolveDemoPlan(dp, engine.id, () => null).readings.map((x) => ({ ...x, planId: plan.id, id: id++, updatedAt: '2024-01-01T00:00:00.000Z' }));
       const c = compareSetups(comparisonInput(engine, [plan], w.parts, new Map([[plan.id, readings]])));
       for (const r of [c.existing, ...c.candidates]) { found.push(...problems(r, `${engine.name} / ${r.label}`)); checked++; }
     });

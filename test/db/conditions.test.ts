@@ -180,7 +180,7 @@ describe('the store keeps an engine’s working conditions', () => {
     const created = repos.engines.create({ ...engineIn(), conditions: { ambientC: 5 } });
     const tryUpdate = (conditions: Record<string, number>): StoreError => {
       try {
-        repos.engines.update(created.id, { ...engineIn(), conditions } as never);
+        repos.engines.update(created.id, { ...engineIn(), conditions } as never, created.updatedAt);
       } catch (e) {
         return e as StoreError;
       }

@@ -43,8 +43,8 @@ describe('loading the demo on first run', () => {
 
   it('does not come back by itself after the user deletes everything', () => {
     loadDemoIfFirstRun(repos);
-    for (const e of repos.engines.list()) repos.engines.delete(e.id, { deletePlansToo: true });
-    for (const p of repos.parts.list()) repos.parts.delete(p.id);
+    for (const e of repos.engines.list()) repos.engines.delete(e.id, { deletePlansToo: true, expectedUpdatedAt: e.updatedAt });
+    for (const p of repos.parts.list()) repos.parts.delete(p.id, p.updatedAt);
     expect(totals()).toEqual({ engines: 0, parts: 0, plans: 0, readings: 0 });
     expect(loadDemoIfFirstRun(repos)).toBeNull();
     expect(totals()).toEqual({ engines: 0, parts: 0, plans: 0, readings: 0 });
@@ -59,7 +59,7 @@ describe('loading the demo on first run', () => {
 
   it('survives a reopen of the file: the flag is stored, not remembered in memory', () => {
     loadDemoIfFirstRun(repos);
-    for (const e of repos.engines.list()) repos.engines.delete(e.id, { deletePlansToo: true });
+    for (const e of repos.engines.list()) repos.engines.delete(e.id, { deletePlansToo: true, expectedUpdatedAt: e.updatedAt });
     const again = createRepositories(db);
     expect(loadDemoIfFirstRun(again)).toBeNull();
   });
@@ -73,7 +73,7 @@ describe('loading the demo on demand', () => {
     expect(totals()).toEqual(once);
 
     const saloon = repos.engines.list().find((e) => e.name === 'Green four-door saloon')!;
-    repos.engines.delete(saloon.id, { deletePlansToo: true });
+    repos.engines.delete(saloon.id, { deletePlansToo: true, expectedUpdatedAt: saloon.updatedAt });
     const plansOfSaloon = demoPlans.filter((p) => p.engine === 'Green four-door saloon').length;
     expect(loadDemo(repos)).toEqual({ enginesAdded: 1, partsAdded: 0, plansAdded: plansOfSaloon });
     expect(totals()).toEqual(once);

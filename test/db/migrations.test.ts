@@ -138,7 +138,8 @@ const perVersion: Record<number, (db: Database.Database) => void> = {
     expect(rows[11]!.note).toMatch(/^\(Recorded as coil-primary-resistance in "MOHM", which could not be converted to ohm\.\) caps lock\?$/);
     expect(rows[12]!.note).toMatch(/supply-voltage-running in "furlong".*to V\.\) $/);
     expect(rows[13]!.note).toBe('kept');
-    // Every row reads back through the repositories (none skipped as unreadable).
+    // Every row reads back through today's repositories (none skipped as unreadable) once the file is current.
+    migrate(old, migrations);
     const corrupt: unknown[] = [];
     expect(createRepositories(old, { onCorruptRow: (r) => corrupt.push(r) }).readings.list(1)).toHaveLength(expected.length);
     expect(corrupt).toEqual([]);
@@ -165,6 +166,50 @@ const perVersion: Record<number, (db: Database.Database) => void> = {
     expect(plan).toMatchObject({ name: 'p', coilId: 1, moduleFeed: 'switched-15', plugGapMm: 0.8, coilWiring: 'as-marked-for-earth' });
     old.close();
   },
+  4: (db) => {
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'sheet_ticks', 'sqlite_sequence']);
+    seedPlan(db);
+    // The defect this version fixes: delete the newest engine, add another; SQLite's plain rowid
+    // would hand out the same id again (largest + 1), AUTOINCREMENT never does (sqlite.org/autoinc.html).
+    db.prepare('DELETE FROM plans WHERE id = 1').run();
+    db.prepare('DELETE FROM engines WHERE id = 1').run();
+    seedPlan(db);
+    expect(db.prepare('SELECT id FROM engines').all()).toEqual([{ id: 2 }]);
+    expect(db.prepare('SELECT id FROM plans').all()).toEqual([{ id: 2 }]);
+    expect(db.prepare('SELECT id FROM parts ORDER BY id').all()).toEqual([{ id: 1 }, { id: 2 }]);
+    db.prepare("INSERT INTO readings (plan_id, quantity, value, unit, taken_on, created_at, updated_at) VALUES (2, 'other', 1, 'V', '2024-01-01', ?, ?)").run(NOW, NOW);
+    db.prepare('DELETE FROM readings').run();
+    db.prepare("INSERT INTO readings (plan_id, quantity, value, unit, taken_on, created_at, updated_at) VALUES (2, 'other', 1, 'V', '2024-01-01', ?, ?)").run(NOW, NOW);
+    expect(db.prepare('SELECT id FROM readings').all()).toEqual([{ id: 2 }]);
+    expect(() => db.prepare("INSERT INTO readings (plan_id, quantity, value, unit, taken_on, created_at) VALUES (2, 'other', 1, 'V', '2024-01-01', ?)").run(NOW)).toThrow(/NOT NULL/);
+
+    // A version-3 file keeps every row, id and reference through the rebuild; readings get updated_at = created_at.
+    const old = rawMemory();
+    migrate(old, migrations, 3);
+    seedPlan(old);
+    old.prepare('INSERT INTO advance_points (engine_id, position, rpm, advance_deg) VALUES (1, 0, 800, 0), (1, 1, 2000, 12)').run();
+    old.prepare("UPDATE plans SET coil_wiring = 'reversed' WHERE id = 1").run();
+    old.prepare("INSERT INTO readings (id, plan_id, quantity, value, unit, taken_on, note, created_at) VALUES (7, 1, 'other', 1, 'V', '2024-01-01', 'kept', '2024-02-02T00:00:00.000Z')").run();
+    old.prepare("INSERT INTO sheet_ticks (plan_id, step_key, ticked_on) VALUES (1, 'fit.coil', ?)").run(NOW);
+    const before = (t: string) => old.prepare(`SELECT * FROM ${t} ORDER BY 1`).all();
+    const kept = Object.fromEntries(['parts', 'engines', 'plans', 'advance_points', 'sheet_ticks'].map((t) => [t, before(t)]));
+    migrate(old, migrations, 4);
+    for (const [t, rows] of Object.entries(kept)) expect(before(t), t).toEqual(rows);
+    expect(old.prepare('SELECT id, note, created_at, updated_at FROM readings').all()).toEqual([
+      { id: 7, note: 'kept', created_at: '2024-02-02T00:00:00.000Z', updated_at: '2024-02-02T00:00:00.000Z' },
+    ]);
+    expect(old.pragma('foreign_key_check')).toEqual([]);
+    const indexes = old.prepare<[], { name: string }>("SELECT name FROM sqlite_master WHERE type = 'index' AND name NOT LIKE 'sqlite_%' ORDER BY name").all().map((r) => r.name);
+    expect(indexes).toEqual(['parts_by_kind', 'plans_by_ballast', 'plans_by_coil', 'plans_by_engine', 'plans_by_leads', 'plans_by_module', 'plans_by_plug', 'plans_by_tach', 'readings_by_plan']);
+    // The references still guard and cascade after the rename.
+    expect(() => old.prepare('DELETE FROM parts WHERE id = 1').run()).toThrow(/FOREIGN KEY/);
+    old.prepare('DELETE FROM engines WHERE id = 1').run();
+    for (const t of ['advance_points', 'plans', 'readings', 'sheet_ticks']) expect(old.prepare(`SELECT COUNT(*) AS n FROM ${t}`).get(), t).toEqual({ n: 0 });
+    // The deleted engine's and reading's ids are not handed out again.
+    seedPlan(old);
+    expect(old.prepare('SELECT id FROM engines').all()).toEqual([{ id: 2 }]);
+    old.close();
+  },
 };
 
 /** An engine with one plan (id 1), in raw SQL, as versions 1 and 2 store them. */
@@ -178,7 +223,7 @@ function seedPlan(db: Database.Database): void {
   ).run(NOW, NOW);
   db.prepare(
     `INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at)
-     VALUES (1, 'p', 'draft', 1, 0, 'switched-15', 0.8, ?, ?)`,
+     VALUES ((SELECT max(id) FROM engines), 'p', 'draft', (SELECT max(id) FROM parts), 0, 'switched-15', 0.8, ?, ?)`,
   ).run(NOW, NOW);
 }
 
@@ -281,7 +326,7 @@ describe('opening a real file', () => {
     const file = join(temp('chain'), 'workshop.sqlite3');
     const db = openStore(file);
     expect(readUserVersion(db)).toBe(SCHEMA_VERSION);
-    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'sheet_ticks']);
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'sheet_ticks', 'sqlite_sequence']);
     closeStore(db);
     expect(existsSync(file)).toBe(true);
   });

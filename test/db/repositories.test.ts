@@ -10,6 +10,7 @@ import { closeStore, openStore } from '../../db/open.js';
 import { createRepositories, type CorruptRow, type Repositories } from '../../db/repositories/index.js';
 import { ballastIn, cdModuleIn, coilIn, engineIn, everyKind, leadsIn, moduleIn, planIn, plugIn, readingIn, tachIn, tempDir } from './samples.js';
 
+const NOW = '2024-01-01T00:00:00.000Z';
 type Store = { db: Database.Database; repos: Repositories; corrupt: CorruptRow[]; close(): void };
 
 function open(where: 'memory' | 'file'): Store {
@@ -56,13 +57,14 @@ describe.each(['memory', 'file'] as const)('repositories on %s', (where) => {
 
   it.each(everyKind.map((p) => [p.kind, p] as const))('creates, reads, updates and deletes a %s part', (_kind, input) => {
     const created = s.repos.parts.create(input);
-    expect(created).toEqual({ ...input, id: created.id });
+    expect(created).toEqual({ ...input, id: created.id, updatedAt: created.updatedAt });
     expect(s.repos.parts.get(created.id)).toEqual(created);
     expect(s.repos.parts.list(input.kind).map((p) => p.id)).toEqual([created.id]);
 
-    const renamed = s.repos.parts.update(created.id, { ...input, name: 'Renamed', notes: 'changed' });
-    expect(renamed).toEqual({ ...input, name: 'Renamed', notes: 'changed', id: created.id });
-    expect(s.repos.parts.delete(created.id)).toEqual({ deleted: true });
+    const renamed = s.repos.parts.update(created.id, { ...input, name: 'Renamed', notes: 'changed' }, created.updatedAt);
+    expect(renamed).toEqual({ ...input, name: 'Renamed', notes: 'changed', id: created.id, updatedAt: renamed.updatedAt });
+    expect(renamed.updatedAt > created.updatedAt).toBe(true);
+    expect(s.repos.parts.delete(created.id, renamed.updatedAt)).toEqual({ deleted: true });
     expect(storeError(() => s.repos.parts.get(created.id)).code).toBe('NOT_FOUND');
   });
 
@@ -77,17 +79,18 @@ describe.each(['memory', 'file'] as const)('repositories on %s', (where) => {
     const ballast = s.repos.parts.create(ballastIn);
     const input = engineIn({ coilId: coil.id, ballastId: ballast.id });
     const created = s.repos.engines.create(input);
-    expect(created).toEqual({ ...input, id: created.id });
+    expect(created).toEqual({ ...input, id: created.id, updatedAt: created.updatedAt });
     expect(s.repos.engines.get(created.id)).toEqual(created);
     expect(s.repos.engines.list()).toEqual([
-      { id: created.id, name: 'Test four', yearText: 'about 1965', modelText: 'saloon', cylinders: 4, systemVoltageV: 12, earthPolarity: 'negative', planCount: 0 },
+      { id: created.id, name: 'Test four', yearText: 'about 1965', modelText: 'saloon', cylinders: 4, systemVoltageV: 12, earthPolarity: 'negative', planCount: 0, updatedAt: created.updatedAt },
     ]);
 
     const shorter = { ...input, name: 'Test four, re-curved', advanceCurve: [{ rpm: 1000, advanceDeg: 2 }, { rpm: 3000, advanceDeg: 20 }] };
-    expect(s.repos.engines.update(created.id, shorter)).toEqual({ ...shorter, id: created.id });
+    const saved = s.repos.engines.update(created.id, shorter, created.updatedAt);
+    expect(saved).toEqual({ ...shorter, id: created.id, updatedAt: saved.updatedAt });
     expect(counts(s.db).advance_points).toBe(2);
 
-    expect(s.repos.engines.delete(created.id, { deletePlansToo: false })).toEqual({ deleted: true, plansDeleted: 0 });
+    expect(s.repos.engines.delete(created.id, { deletePlansToo: false, expectedUpdatedAt: saved.updatedAt })).toEqual({ deleted: true, plansDeleted: 0 });
     expect(counts(s.db)).toMatchObject({ engines: 0, advance_points: 0 });
   });
 
@@ -103,16 +106,16 @@ describe.each(['memory', 'file'] as const)('repositories on %s', (where) => {
     expect(s.repos.plans.list(engine.id)).toEqual([created]);
     expect(s.repos.engines.list()[0]!.planCount).toBe(1);
 
-    const updated = s.repos.plans.update(created.id, { ...input, status: 'checked', crankingBypass: true });
+    const updated = s.repos.plans.update(created.id, { ...input, status: 'checked', crankingBypass: true }, created.updatedAt);
     expect(updated).toMatchObject({ status: 'checked', crankingBypass: true });
 
     const r1 = s.repos.readings.add(readingIn(created.id, 3.1));
     const r2 = s.repos.readings.add({ ...readingIn(created.id, 12.6), quantity: 'battery-voltage-resting', unit: 'V' });
     expect(s.repos.readings.list(created.id)).toEqual([r1, r2]);
-    expect(s.repos.readings.delete(r1.id)).toEqual({ deleted: true });
+    expect(s.repos.readings.delete(r1.id, r1.updatedAt)).toEqual({ deleted: true, planId: created.id });
     expect(s.repos.readings.list(created.id)).toEqual([r2]);
 
-    expect(s.repos.plans.delete(created.id)).toEqual({ deleted: true, readingsDeleted: 1 });
+    expect(s.repos.plans.delete(created.id, updated.updatedAt)).toEqual({ deleted: true, readingsDeleted: 1 });
     expect(counts(s.db)).toMatchObject({ plans: 0, readings: 0 });
   });
 
@@ -129,7 +132,7 @@ describe.each(['memory', 'file'] as const)('repositories on %s', (where) => {
     const engine = s.repos.engines.create({ ...engineIn(), advanceCurve: [{ rpm: 900, advanceDeg: 0 }] });
     s.db.exec(`CREATE TEMP TRIGGER refuse_third_point BEFORE INSERT ON advance_points
                WHEN NEW.position = 2 BEGIN SELECT RAISE(ABORT, 'forced failure for the test'); END;`);
-    expect(() => s.repos.engines.update(engine.id, { ...engineIn(), name: 'Half-saved' })).toThrow(/forced failure/);
+    expect(() => s.repos.engines.update(engine.id, { ...engineIn(), name: 'Half-saved' }, engine.updatedAt)).toThrow(/forced failure/);
     expect(s.repos.engines.get(engine.id)).toEqual(engine);
   });
 });
@@ -145,7 +148,7 @@ describe('references, refusals and cascades', () => {
     const engine = s.repos.engines.create(engineIn());
     for (let i = 0; i < 3; i++) s.repos.plans.create({ ...planIn(engine.id), name: `Plan ${i}` });
     const before = counts(s.db);
-    const err = storeError(() => s.repos.engines.delete(engine.id, { deletePlansToo: false }));
+    const err = storeError(() => s.repos.engines.delete(engine.id, { deletePlansToo: false, expectedUpdatedAt: engine.updatedAt }));
     expect(err.code).toBe('IN_USE');
     expect(err.message).toMatch(/^3 plans use this engine\./);
     expect(counts(s.db)).toEqual(before);
@@ -160,7 +163,7 @@ describe('references, refusals and cascades', () => {
     s.repos.readings.add(readingIn(p1.id));
     s.repos.readings.add(readingIn(p2.id));
     s.repos.readings.add(readingIn(kept.id));
-    expect(s.repos.engines.delete(engine.id, { deletePlansToo: true })).toEqual({ deleted: true, plansDeleted: 2 });
+    expect(s.repos.engines.delete(engine.id, { deletePlansToo: true, expectedUpdatedAt: engine.updatedAt })).toEqual({ deleted: true, plansDeleted: 2 });
     expect(counts(s.db)).toMatchObject({ engines: 1, plans: 1, readings: 1 });
     expect(s.repos.plans.list()).toEqual([kept]);
   });
@@ -171,10 +174,10 @@ describe('references, refusals and cascades', () => {
     const engine = s.repos.engines.create({ ...engineIn(), existing: { ...engineIn().existing, tachPartId: tach.id } });
     s.repos.plans.create({ ...planIn(engine.id, { coilId: coil.id }), name: 'Coil swap' });
 
-    const byPlan = storeError(() => s.repos.parts.delete(coil.id));
+    const byPlan = storeError(() => s.repos.parts.delete(coil.id, coil.updatedAt));
     expect(byPlan.code).toBe('IN_USE');
     expect(byPlan.message).toContain('1 plan (Coil swap)');
-    const byEngine = storeError(() => s.repos.parts.delete(tach.id));
+    const byEngine = storeError(() => s.repos.parts.delete(tach.id, tach.updatedAt));
     expect(byEngine.code).toBe('IN_USE');
     expect(byEngine.message).toContain('existing setup of 1 engine (Test four)');
     expect(counts(s.db).parts).toBe(2);
@@ -204,9 +207,10 @@ describe('references, refusals and cascades', () => {
   it('refuses to change the kind of a part that is in use, and allows it when the part is free', () => {
     const coil = s.repos.parts.create(coilIn);
     const engine = s.repos.engines.create(engineIn({ coilId: coil.id }));
-    expect(storeError(() => s.repos.parts.update(coil.id, { ...plugIn })).fields).toHaveProperty('kind');
-    s.repos.engines.update(engine.id, engineIn());
-    expect(s.repos.parts.update(coil.id, plugIn)).toEqual({ ...plugIn, id: coil.id });
+    expect(storeError(() => s.repos.parts.update(coil.id, { ...plugIn }, coil.updatedAt)).fields).toHaveProperty('kind');
+    s.repos.engines.update(engine.id, engineIn(), engine.updatedAt);
+    const plug = s.repos.parts.update(coil.id, plugIn, coil.updatedAt);
+    expect(plug).toEqual({ ...plugIn, id: coil.id, updatedAt: plug.updatedAt });
   });
 
   it('validates input at the store boundary even if the bridge was skipped', () => {
@@ -221,15 +225,15 @@ describe('references, refusals and cascades', () => {
 
   it('answers NOT_FOUND for ids that name nothing', () => {
     expect(storeError(() => s.repos.engines.get(5)).code).toBe('NOT_FOUND');
-    expect(storeError(() => s.repos.engines.update(5, engineIn())).code).toBe('NOT_FOUND');
-    expect(storeError(() => s.repos.engines.delete(5, { deletePlansToo: true })).code).toBe('NOT_FOUND');
-    expect(storeError(() => s.repos.parts.update(5, coilIn)).code).toBe('NOT_FOUND');
-    expect(storeError(() => s.repos.parts.delete(5)).code).toBe('NOT_FOUND');
+    expect(storeError(() => s.repos.engines.update(5, engineIn(), NOW)).code).toBe('NOT_FOUND');
+    expect(storeError(() => s.repos.engines.delete(5, { deletePlansToo: true, expectedUpdatedAt: NOW })).code).toBe('NOT_FOUND');
+    expect(storeError(() => s.repos.parts.update(5, coilIn, NOW)).code).toBe('NOT_FOUND');
+    expect(storeError(() => s.repos.parts.delete(5, NOW)).code).toBe('NOT_FOUND');
     expect(storeError(() => s.repos.plans.get(5)).code).toBe('NOT_FOUND');
-    expect(storeError(() => s.repos.plans.delete(5)).code).toBe('NOT_FOUND');
+    expect(storeError(() => s.repos.plans.delete(5, NOW)).code).toBe('NOT_FOUND');
     expect(storeError(() => s.repos.plans.list(5)).code).toBe('NOT_FOUND');
     expect(storeError(() => s.repos.readings.list(5)).code).toBe('NOT_FOUND');
-    expect(storeError(() => s.repos.readings.delete(5)).code).toBe('NOT_FOUND');
+    expect(storeError(() => s.repos.readings.delete(5, NOW)).code).toBe('NOT_FOUND');
   });
 });
 
@@ -263,7 +267,7 @@ describe('rows that no longer match the schema', () => {
     expect(err.message).toMatch(/id \d+ in the engines table could not be read \(existing\.plugGapMm/);
     // The list reads only plain columns, so the engine still shows and can be opened to repair or delete.
     expect(s.repos.engines.list().map((e) => e.id)).toEqual([engine.id]);
-    expect(s.repos.engines.delete(engine.id, { deletePlansToo: false })).toEqual({ deleted: true, plansDeleted: 0 });
+    expect(s.repos.engines.delete(engine.id, { deletePlansToo: false, expectedUpdatedAt: engine.updatedAt })).toEqual({ deleted: true, plansDeleted: 0 });
   });
 });
 

@@ -144,7 +144,7 @@ describe('reading units', () => {
 describe('correcting a reading', () => {
   it('replaces the reading, converting the unit, and keeps its id and plan', () => {
     const r = repos.readings.add(readingIn(plan.id, 3.1));
-    const changed = repos.readings.update(r.id, { ...at('coil-primary-resistance', 2900, 'mohm'), takenOn: '2024-03-10', note: 'again, warm' });
+    const changed = repos.readings.update(r.id, { ...at('coil-primary-resistance', 2900, 'mohm'), takenOn: '2024-03-10', note: 'again, warm' }, r.updatedAt);
     expect(changed).toMatchObject({ id: r.id, planId: plan.id, unit: 'ohm', takenOn: '2024-03-10', note: 'again, warm' });
     expect(changed.value).toBeCloseTo(2900 * 1e-3, 12);
     expect(repos.readings.list(plan.id)).toEqual([changed]);
@@ -152,10 +152,10 @@ describe('correcting a reading', () => {
 
   it('refuses a bad unit, another plan or a missing reading, and leaves the stored one as it was', () => {
     const r = repos.readings.add(readingIn(plan.id, 3.1));
-    expect(storeError(() => repos.readings.update(r.id, at('coil-primary-resistance', 3, 'furlong'))).fields).toHaveProperty('unit');
+    expect(storeError(() => repos.readings.update(r.id, at('coil-primary-resistance', 3, 'furlong'), r.updatedAt)).fields).toHaveProperty('unit');
     const other = repos.plans.create({ ...planIn(plan.engineId), name: 'Other' });
-    expect(storeError(() => repos.readings.update(r.id, readingIn(other.id, 3))).fields).toHaveProperty('planId');
-    expect(storeError(() => repos.readings.update(r.id + 100, readingIn(plan.id))).code).toBe('NOT_FOUND');
+    expect(storeError(() => repos.readings.update(r.id, readingIn(other.id, 3), r.updatedAt)).fields).toHaveProperty('planId');
+    expect(storeError(() => repos.readings.update(r.id + 100, readingIn(plan.id), r.updatedAt)).code).toBe('NOT_FOUND');
     expect(repos.readings.get(r.id)).toEqual(r);
   });
 });
@@ -187,7 +187,7 @@ describe('sheet ticks', () => {
     db = openStore(join(dir, 'workshop.sqlite3'));
     repos = createRepositories(db);
     expect(repos.ticks.list(plan.id).map((t) => t.stepKey)).toEqual(['fit.coil']);
-    repos.plans.delete(plan.id);
+    repos.plans.delete(plan.id, plan.updatedAt);
     expect(db.prepare('SELECT COUNT(*) AS n FROM sheet_ticks').get()).toEqual({ n: 0 });
   });
 });

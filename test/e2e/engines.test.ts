@@ -209,13 +209,13 @@ describe('the engines screen', () => {
     await page.getByLabel('Compression ratio (to 1)').fill('8');
 
     // Pick a coil, then take it off the shelf behind the form's back (as another window could).
-    const coils = await api<Array<{ id: number; kind: string; name: string }>>(host, 'parts.list', { kind: 'coil' });
+    const coils = await api<Array<{ id: number; kind: string; name: string; updatedAt: string }>>(host, 'parts.list', { kind: 'coil' });
     let gone: { id: number; name: string } | undefined;
     for (const c of coils) {
       const res = await fetch(`${host.origin}/api/invoke`, {
         method: 'POST',
         headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${host.token}` },
-        body: JSON.stringify({ channel: 'parts.delete', request: { id: c.id } }),
+        body: JSON.stringify({ channel: 'parts.delete', request: { id: c.id, expectedUpdatedAt: c.updatedAt } }),
       });
       if (((await res.json()) as { ok: boolean }).ok) {
         gone = c;

@@ -101,6 +101,14 @@ describe('the weigh screen', () => {
     const tableText = await table.innerText();
     for (const row of ['Cranking, 180 rpm', 'Idle, 750 rpm', 'Mid-range', 'Redline, 6,000 rpm']) expect(tableText).toContain(row);
     expect(tableText).toContain(`${truth.candidates[0]!.keyPoints.idle.energyMj.toFixed(1)} mJ`);
+    // Beside the stored energy, what the spark delivers and how long it lasts (Heywood 1988, ch. 9),
+    // and the cylinder state at the spark per speed; the card lists the setup's worked-out figures.
+    expect(tableText).toContain(`${truth.candidates[0]!.keyPoints.idle.sparkEnergyMj.toFixed(2)} mJ`);
+    expect(tableText).toContain(`${truth.candidates[0]!.keyPoints.idle.sparkDurationMs.toFixed(2)} ms`);
+    expect(tableText).toContain('Cylinder pressure at the spark');
+    const figuresText = await page.getByTestId('setup-figures-1').innerText();
+    expect(figuresText).toMatch(/Time to reach the current limit, idle: [\d.]+ ms|Current limit not reached, idle: the final current [\d.]+ A/);
+    expect(figuresText).toMatch(/Coil secondary ceiling \(insulation rating\): [\d.]+ kV/);
 
     // The cautions, word for word, and the best from the shelf as the API ranks it.
     const cautions = await page.getByTestId('cautions').innerText();

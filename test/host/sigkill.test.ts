@@ -54,7 +54,7 @@ function saveThenKill(host: RunningHost, channel: string, body: unknown): Promis
 
 describe('saves survive SIGKILL of the host', () => {
   it('keeps every acknowledged engine and update across four kills and restarts', async () => {
-    const acknowledged = new Map<number, unknown>(); // id -> engine exactly as the host answered
+    const acknowledged = new Map<number, { updatedAt: string }>(); // id -> engine exactly as the host answered
     let updatedId: number | null = null;
 
     for (let round = 1; round <= 4; round++) {
@@ -74,7 +74,7 @@ describe('saves survive SIGKILL of the host', () => {
         acknowledged.set(json.value.id, json.value);
       }
       if (updatedId !== null) {
-        const { json } = await invoke(host, 'engines.update', { id: updatedId, engine: engineInput({ name: `Updated in round ${round}`, idleRpm: 700 + round }) });
+        const { json } = await invoke(host, 'engines.update', { id: updatedId, expectedUpdatedAt: acknowledged.get(updatedId)!.updatedAt, engine: engineInput({ name: `Updated in round ${round}`, idleRpm: 700 + round }) });
         expect(json.ok).toBe(true);
         acknowledged.set(updatedId, json.value);
       }

@@ -25,28 +25,40 @@ const malformed: Record<ChannelName, { payload: unknown; field: string }> = {
   'engines.list': { payload: 42, field: '_' },
   'engines.get': { payload: { id: 0 }, field: 'id' },
   'engines.create': { payload: { engine: { ...engineIn(), boreMm: -5 } }, field: 'engine.boreMm' },
-  'engines.update': { payload: { id: 1, engine: { ...engineIn(), firingOrder: '1-2-3' } }, field: 'engine.firingOrder' },
-  'engines.delete': { payload: { id: 1 }, field: 'deletePlansToo' },
+  'engines.update': { payload: { id: 1, expectedUpdatedAt: '2024-01-01T00:00:00.000Z', engine: { ...engineIn(), firingOrder: '1-2-3' } }, field: 'engine.firingOrder' },
+  'engines.delete': { payload: { id: 1, expectedUpdatedAt: '2024-01-01T00:00:00.000Z' }, field: 'deletePlansToo' },
   'parts.list': { payload: { kind: 'spanner' }, field: 'kind' },
   'parts.get': { payload: { id: 'one' }, field: 'id' },
   'parts.create': { payload: { part: { ...coilIn, primaryResistanceOhm20C: 0 } }, field: 'part.primaryResistanceOhm20C' },
-  'parts.update': { payload: { id: 1, part: { kind: 'wrench', name: 'x', notes: '' } }, field: 'part.kind' },
-  'parts.delete': { payload: { id: 1.5 }, field: 'id' },
+  'parts.update': { payload: { id: 1, expectedUpdatedAt: '2024-01-01T00:00:00.000Z', part: { kind: 'wrench', name: 'x', notes: '' } }, field: 'part.kind' },
+  'parts.delete': { payload: { id: 1.5, expectedUpdatedAt: '2024-01-01T00:00:00.000Z' }, field: 'id' },
   'plans.list': { payload: { engineId: -1 }, field: 'engineId' },
   'plans.get': { payload: {}, field: 'id' },
   'plans.create': { payload: { plan: { ...planIn(1), status: 'finished' } }, field: 'plan.status' },
-  'plans.update': { payload: { id: 1, plan: { ...planIn(1), plugGapMm: 9 } }, field: 'plan.plugGapMm' },
-  'plans.delete': { payload: { id: null }, field: 'id' },
+  'plans.update': { payload: { id: 1, expectedUpdatedAt: '2024-01-01T00:00:00.000Z', plan: { ...planIn(1), plugGapMm: 9 } }, field: 'plan.plugGapMm' },
+  'plans.delete': { payload: { id: 1 }, field: 'expectedUpdatedAt' },
   'readings.list': { payload: { planId: '1' }, field: 'planId' },
   'readings.add': { payload: { reading: { ...readingIn(1), value: 'NaN' } }, field: 'reading.value' },
-  'readings.delete': { payload: { id: -3 }, field: 'id' },
-  'readings.update': { payload: { id: 1, reading: { ...readingIn(1), unit: 'furlong' } }, field: 'reading.unit' },
+  'readings.delete': { payload: { id: -3, expectedUpdatedAt: '2024-01-01T00:00:00.000Z' }, field: 'id' },
+  'readings.update': { payload: { id: 1, expectedUpdatedAt: '2024-01-01T00:00:00.000Z', reading: { ...readingIn(1), unit: 'furlong' } }, field: 'reading.unit' },
   'plans.setStatus': { payload: { id: 1, status: 'finished' }, field: 'status' },
+  'store.unreadable': { payload: { all: true }, field: '_' },
+  'check.cancel': { payload: { now: 1 }, field: '_' },
+  'check.progress': { payload: [], field: '_' },
   'sheet.get': { payload: { planId: 1, colour: 'red' }, field: '_' },
   'sheet.tick': { payload: { planId: 1, stepKey: 'fit.coil\u0007', ticked: true }, field: 'stepKey' },
   'app.print': { payload: { pageSize: 'A3' }, field: 'pageSize' },
   'check.plans': { payload: { engineId: 1, planIds: [1, 2, 3, 4] }, field: 'planIds' },
   'check.search': { payload: { engineId: 1, top: 11 }, field: 'top' },
+  'backup.create': { payload: { now: 'yes' }, field: '_' },
+  'backup.list': { payload: [], field: '_' },
+  'backup.restore': { payload: { name: 'workshop-2026-01-01T00-00-00-000Z-manual.sqlite3' }, field: 'confirmed' },
+  'workshop.export': { payload: { format: 'xml' }, field: '_' },
+  'workshop.importPreview': { payload: { text: '' }, field: 'text' },
+  'workshop.import': { payload: { text: 42 }, field: 'text' },
+  'parts.csvExport': { payload: { kind: 'spanner' }, field: 'kind' },
+  'parts.csvImportPreview': { payload: { kind: 'coil' }, field: 'text' },
+  'parts.csvImport': { payload: { kind: 'wrench', text: 'name' }, field: 'kind' },
 };
 
 describe('malformed requests', () => {
@@ -89,7 +101,7 @@ describe('happy paths', () => {
   });
 
   it('does not reload the demo when the same folder is opened again after the user emptied it', async () => {
-    for (const e of await ok('engines.list', {})) await ok('engines.delete', { id: e.id, deletePlansToo: true });
+    for (const e of await ok('engines.list', {})) await ok('engines.delete', { id: e.id, deletePlansToo: true, expectedUpdatedAt: e.updatedAt });
     store.reopen('desktop');
     expect(await ok('engines.list', {})).toEqual([]);
   });
@@ -103,11 +115,21 @@ describe('happy paths', () => {
   it('refuses to delete an engine with plans until the user confirms, then reports how many plans went', async () => {
     const engines = await ok('engines.list', {});
     const withPlans = engines.find((e: { planCount: number }) => e.planCount > 0);
-    const refused = await call('engines.delete', { id: withPlans.id, deletePlansToo: false });
+    const refused = await call('engines.delete', { id: withPlans.id, deletePlansToo: false, expectedUpdatedAt: withPlans.updatedAt });
     expect(refused).toMatchObject({ ok: false, error: { code: 'IN_USE' } });
     const before = counts();
-    expect(await ok('engines.delete', { id: withPlans.id, deletePlansToo: true })).toEqual({ deleted: true, plansDeleted: withPlans.planCount });
+    expect(await ok('engines.delete', { id: withPlans.id, deletePlansToo: true, expectedUpdatedAt: withPlans.updatedAt })).toEqual({ deleted: true, plansDeleted: withPlans.planCount });
     expect(counts().plans).toBe(before.plans! - withPlans.planCount);
+  });
+
+  it('answers STALE, with a sentence, to a save or delete sent from a screen older than the record, and changes nothing', async () => {
+    const seen = await ok('engines.create', { engine: engineIn() });
+    const newer = await ok('engines.update', { id: seen.id, expectedUpdatedAt: seen.updatedAt, engine: { ...engineIn(), name: 'Saved first' } });
+    const stale = await call('engines.update', { id: seen.id, expectedUpdatedAt: seen.updatedAt, engine: { ...engineIn(), name: 'Saved second' } });
+    expect(stale).toMatchObject({ ok: false, error: { code: 'STALE', message: expect.stringMatching(/Reload/) } });
+    const staleDelete = await call('engines.delete', { id: seen.id, expectedUpdatedAt: seen.updatedAt, deletePlansToo: true });
+    expect(staleDelete).toMatchObject({ ok: false, error: { code: 'STALE' } });
+    expect(await ok('engines.get', { id: seen.id })).toEqual(newer);
   });
 
   it('passes the store’s own field errors back under the request’s key', async () => {

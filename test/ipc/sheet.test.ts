@@ -136,12 +136,12 @@ describe('readings and the next check', () => {
     const gap = await ok<Reading>('readings.add', { reading: reading(p.id, 'plug-gap', 28, 'thou') });
     expect(gap.unit).toBe('mm');
     expect(gap.value).toBeCloseTo(28 * 0.0254, 12); // thou = 0.001 in, in = 25.4 mm
-    const fixed = await ok<Reading>('readings.update', { id: gap.id, reading: reading(p.id, 'plug-gap', 0.03, 'in') });
+    const fixed = await ok<Reading>('readings.update', { id: gap.id, expectedUpdatedAt: gap.updatedAt, reading: reading(p.id, 'plug-gap', 0.03, 'in') });
     expect(fixed).toMatchObject({ id: gap.id, unit: 'mm' });
     expect(fixed.value).toBeCloseTo(0.03 * 25.4, 12);
-    const wrong = await call('readings.update', { id: gap.id, reading: reading(p.id, 'plug-gap', 1, 'MM') });
+    const wrong = await call('readings.update', { id: gap.id, expectedUpdatedAt: fixed.updatedAt, reading: reading(p.id, 'plug-gap', 1, 'MM') });
     expect(wrong).toMatchObject({ ok: false, error: { fields: { 'reading.unit': expect.any(String) } } });
-    expect(await call('readings.update', { id: gap.id, reading: reading(p.id, 'plug-gap', 1, 'mm'), also: 1 })).toMatchObject({ ok: false, error: { code: 'INVALID_INPUT' } });
+    expect(await call('readings.update', { id: gap.id, expectedUpdatedAt: fixed.updatedAt, reading: reading(p.id, 'plug-gap', 1, 'mm'), also: 1 })).toMatchObject({ ok: false, error: { code: 'INVALID_INPUT' } });
     expect(await ok('readings.list', { planId: p.id })).toEqual([fixed]);
   });
 });
@@ -196,10 +196,10 @@ describe('plan status', () => {
     await ok('check.plans', { engineId: p.engineId, planIds: [p.id] });
     // An editor opened before the weighing still holds 'draft': it sends the fields without a status.
     const { id: _id, updatedAt: _at, status: _status, ...fields } = p;
-    const edited = await ok<Plan>('plans.update', { id: p.id, plan: { ...fields, notes: 'Edited after weighing.' } });
+    const edited = await ok<Plan>('plans.update', { id: p.id, expectedUpdatedAt: p.updatedAt, plan: { ...fields, notes: 'Edited after weighing.' } });
     expect(edited.status).toBe('checked');
     expect(edited.notes).toBe('Edited after weighing.');
-    expect((await ok<Plan>('plans.update', { id: p.id, plan: { ...fields, status: 'draft' } })).status).toBe('draft');
+    expect((await ok<Plan>('plans.update', { id: p.id, expectedUpdatedAt: edited.updatedAt, plan: { ...fields, status: 'draft' } })).status).toBe('draft');
   });
 
   it('a reading out of band keeps the plan at wired (the latest reading per quantity counts)', async () => {
@@ -216,7 +216,7 @@ describe('plan status', () => {
     expect(a.status).toBe('wired');
     expect(a.judged.find((j) => j.readingId === high.id)).toMatchObject({ stepKey: first!.key, band: 'high' });
     // Corrected: the same reading, now in band, finishes the work.
-    await ok('readings.update', { id: high.id, reading: reading(p.id, first!.reading!.quantity, first!.reading!.expected, first!.reading!.unit, '2024-05-02') });
+    await ok('readings.update', { id: high.id, expectedUpdatedAt: high.updatedAt, reading: reading(p.id, first!.reading!.quantity, first!.reading!.expected, first!.reading!.unit, '2024-05-02') });
     expect((await ok<Plan>('plans.get', { id: p.id })).status).toBe('done');
   });
 

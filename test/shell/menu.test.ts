@@ -21,6 +21,9 @@ describe('menuTemplate', () => {
       const roles = all.map((i) => i.role).filter(Boolean);
       expect(roles).not.toContain('reload');
       expect(roles).not.toContain('forceReload');
+      // A release build offers no DevTools; a development run does.
+      expect(roles).not.toContain('toggleDevTools');
+      expect(flatten(menuTemplate(() => {}, platform, true)).map((i) => i.role)).toContain('toggleDevTools');
       for (const r of ['undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'quit']) expect(roles).toContain(r);
       expect(all.find((i) => i.id === 'print-to-pdf')?.accelerator).toBe('CmdOrCtrl+P');
       expect(all.find((i) => i.id === 'print-to-pdf-letter')?.accelerator).toBe('CmdOrCtrl+Shift+P');

@@ -6,12 +6,21 @@
  * "Do not use <webview>" (the tag is off unless asked for).
  */
 import { describe, expect, it } from 'vitest';
-import { windowOptions } from '../../electron/shell/window-options.js';
+import { devToolsWanted, windowOptions } from '../../electron/shell/window-options.js';
 
 const options = windowOptions({ preloadPath: '/app/dist-electron/preload.cjs', title: 'Ignition Planner' });
 const prefs = options.webPreferences!;
 
 describe('windowOptions', () => {
+  it('has DevTools off unless a development run asks for them (--dev-tools or IGNITION_DEV_TOOLS=1)', () => {
+    expect(prefs.devTools).toBe(false);
+    expect(windowOptions({ preloadPath: '/p.cjs', title: 'x', devTools: true }).webPreferences!.devTools).toBe(true);
+    expect(devToolsWanted(['electron', '.'], {})).toBe(false);
+    expect(devToolsWanted(['electron', '.'], { IGNITION_DEV_TOOLS: '0', NODE_ENV: 'development' })).toBe(false);
+    expect(devToolsWanted(['electron', '.', '--dev-tools'], {})).toBe(true);
+    expect(devToolsWanted(['electron', '.'], { IGNITION_DEV_TOOLS: '1' })).toBe(true);
+  });
+
   it('isolates the page from the preload and sandboxes the renderer', () => {
     expect(prefs.contextIsolation).toBe(true);
     expect(prefs.sandbox).toBe(true);

@@ -39,6 +39,9 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
   const [loadProblem, setLoadProblem] = useState<string | null>(null);
   const [parts, setParts] = useState<Record<PartKind, Part[]>>(emptyParts);
   const [status, setStatus] = useState<SaveStatus | null>(null);
+  // The version of the engine on screen (sent with a save or delete) and the reload counter.
+  const [version, setVersion] = useState('');
+  const [reloads, setReloads] = useState(0);
   const headingRef = useRef<HTMLHeadingElement>(null);
 
   useEffect(() => {
@@ -49,22 +52,24 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
       for (const p of r.value) byKind[p.kind].push(p);
       setParts(byKind);
     });
-    if (id !== null) {
-      void call('engines.get', { id }).then((r) => {
+    const shownId = engineId ?? id;
+    if (shownId !== null) {
+      void call('engines.get', { id: shownId }).then((r) => {
         if (!live) return;
         if (!r.ok) return setLoadProblem(r.error.message);
         const f = engineToForm(r.value, unit);
         setForm(f);
         setSavedPrint(formFingerprint(f));
         setSavedName(r.value.name);
+        setVersion(r.value.updatedAt);
         onOpened(r.value);
       });
     }
     return () => {
       live = false;
     };
-    // Loaded once per editor; the unit is handled by the effect below.
-  }, [id]);
+    // Loaded once per editor (and again on reload); the unit is handled by the effect below.
+  }, [id, reloads]);
 
   // Switching mm/inch re-shows the gaps; the stored millimetres stay exactly as they were.
   useEffect(() => {
@@ -84,7 +89,7 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
       leave({ to: 'engines' });
       onDeleted(deletedId);
     },
-    (message) => setStatus({ kind: 'problem', text: message }),
+    (message, code) => setStatus({ kind: 'problem', text: message, stale: code === 'STALE' }),
   );
 
   if (loadProblem) return <CannotOpen title="Engine" titleId="editor-title" problem={loadProblem} back={() => navigate({ to: 'engines' })} backLabel="Back to the engines" />;
@@ -99,8 +104,8 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
     saveForm(e, check, {
       what: 'this',
       serverPrefix: 'engine',
-      send: (engine) => (engineId === null ? call('engines.create', { engine }) : call('engines.update', { id: engineId, engine })),
-      problem: (text) => setStatus({ kind: 'problem', text }),
+      send: (engine) => (engineId === null ? call('engines.create', { engine }) : call('engines.update', { id: engineId, expectedUpdatedAt: version, engine })),
+      problem: (text, code) => setStatus({ kind: 'problem', text, stale: code === 'STALE' }),
       saved: (engine) => {
         // Show what the store now holds (it may have tidied the text) and take it as the clean state.
         const savedForm = engineToForm(engine, unit);
@@ -108,6 +113,7 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
         setSavedPrint(formFingerprint(savedForm));
         setSavedName(engine.name);
         setEngineId(engine.id);
+        setVersion(engine.updatedAt);
         settle();
         onOpened(engine);
         setStatus({ kind: 'done', text: `Saved “${engine.name}”.` });
@@ -125,7 +131,17 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
         </h1>
         {dirty ? <UnsavedBadge testId="unsaved" /> : null}
       </div>
-      {status ? <EditorStatus status={status} summary={summary} onDismiss={() => setStatus(null)} /> : null}
+      {status ? (
+        <EditorStatus
+          status={status}
+          summary={summary}
+          onDismiss={() => setStatus(null)}
+          onReload={() => {
+            setStatus(null);
+            setReloads((n) => n + 1);
+          }}
+        />
+      ) : null}
       <FieldErrorsContext.Provider value={errorsCtx}>
         <form className="engine-form" onSubmit={(e) => void save(e)} noValidate aria-label={engineId === null ? 'New engine' : `Engine ${title}`}>
           <div className="groups">
@@ -146,7 +162,7 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
               Back to the engines
             </button>
             {engineId !== null ? (
-              <button type="button" className="danger push-right" onClick={() => del.ask({ id: engineId, name: savedName })}>
+              <button type="button" className="danger push-right" onClick={() => del.ask({ id: engineId, name: savedName, updatedAt: version })}>
                 Delete this engine
               </button>
             ) : null}

@@ -17,7 +17,11 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
       setDone(plansDeleted > 0 ? `${name} was deleted, with ${plansDeleted === 1 ? 'its plan' : `its ${plansDeleted} plans`}.` : `${name} was deleted.`);
       reload();
     },
-    (message) => setProblem(message),
+    (message, code) => {
+      setProblem(message);
+      // Changed elsewhere since the list was read: show the list as it is now.
+      if (code === 'STALE' || code === 'NOT_FOUND') reload();
+    },
   );
 
   return (
@@ -61,7 +65,7 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
                 <td className="num">{e.systemVoltageV} V</td>
                 <td>{earthWords(e.earthPolarity)}</td>
                 <td className="num">{e.planCount}</td>
-                <RowActions name={e.name} onEdit={() => navigate({ to: 'engine', id: e.id })} onDelete={() => del.ask({ id: e.id, name: e.name })} />
+                <RowActions name={e.name} onEdit={() => navigate({ to: 'engine', id: e.id })} onDelete={() => del.ask({ id: e.id, name: e.name, updatedAt: e.updatedAt })} />
               </tr>
             ))}
           </tbody>

@@ -7,13 +7,14 @@ import { call } from '../../app/bridge.js';
 import { useDeleteSteps } from '../../app/delete-steps.js';
 import { Confirm } from '../../app/Dialog.js';
 
-export function useDeleteEngine(onDone: (id: number, plansDeleted: number) => void, onProblem: (message: string) => void) {
+/** `onProblem` gets the store's code too: STALE means the engine changed since it was shown (reload it). */
+export function useDeleteEngine(onDone: (id: number, plansDeleted: number) => void, onProblem: (message: string, code: string) => void) {
   const { target, stage, setStage, busy, setBusy, close, ask } = useDeleteSteps<{ step: 'plans'; count: number }>();
 
   const send = async (deletePlansToo: boolean): Promise<void> => {
     if (!target) return;
     setBusy(true);
-    const r = await call('engines.delete', { id: target.id, deletePlansToo });
+    const r = await call('engines.delete', { id: target.id, deletePlansToo, expectedUpdatedAt: target.updatedAt });
     if (!r.ok && r.error.code === 'IN_USE' && !deletePlansToo) {
       const plans = await call('plans.list', { engineId: target.id });
       setBusy(false);
@@ -24,7 +25,7 @@ export function useDeleteEngine(onDone: (id: number, plansDeleted: number) => vo
     const id = target.id;
     close();
     if (r.ok) onDone(id, r.value.plansDeleted);
-    else onProblem(r.error.message);
+    else onProblem(r.error.message, r.error.code);
   };
 
   const dialog: ReactNode =

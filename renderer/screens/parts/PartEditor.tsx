@@ -33,12 +33,14 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
   const [saved, setSaved] = useState<Part | null>(null);
   const [loadProblem, setLoadProblem] = useState<string | null>(null);
   const [status, setStatus] = useState<SaveStatus | null>(null);
+  // Bumped by "Reload the saved version" after a save was refused as stale.
+  const [reloads, setReloads] = useState(0);
   const headingRef = useRef<HTMLHeadingElement>(null);
 
   useEffect(() => {
     if (isNew) return;
     let live = true;
-    void call('parts.get', { id: target.id }).then((r) => {
+    void call('parts.get', { id: partId ?? target.id }).then((r) => {
       if (!live) return;
       if (!r.ok) return setLoadProblem(r.error.message);
       const f = partToForm(r.value, unit);
@@ -49,8 +51,8 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
     return () => {
       live = false;
     };
-    // Loaded once per editor; the unit is handled by the effect below.
-  }, []);
+    // Loaded once per editor (and again on reload); the unit is handled by the effect below.
+  }, [reloads]);
 
   useEffect(() => {
     setForm((f) => (f ? regapForm(f, unit) : f));
@@ -73,11 +75,14 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
   const dirty = form !== null && formFingerprint(form) !== savedPrint;
   useLeaveGuard(dirty, saved ? `“${saved.name}”` : 'This new part');
 
-  const del = useDeletePart((t) => {
-    // Leave first: moving clears the frame's status line, and the "deleted" line must survive it.
-    leave({ to: 'parts' });
-    onDeleted(t.name);
-  });
+  const del = useDeletePart(
+    (t) => {
+      // Leave first: moving clears the frame's status line, and the "deleted" line must survive it.
+      leave({ to: 'parts' });
+      onDeleted(t.name);
+    },
+    () => setReloads((n) => n + 1),
+  );
 
   if (loadProblem) return <CannotOpen title="Part" titleId="part-title" problem={loadProblem} back={() => navigate({ to: 'parts' })} backLabel="Back to the parts" />;
   if (!form || !check) return <p className="quiet">Reading the part…</p>;
@@ -91,8 +96,8 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
     saveForm(e, check, {
       what: 'this',
       serverPrefix: 'part',
-      send: (part) => (partId === null ? call('parts.create', { part }) : call('parts.update', { id: partId, part })),
-      problem: (text) => setStatus({ kind: 'problem', text }),
+      send: (part) => (partId === null || !saved ? call('parts.create', { part }) : call('parts.update', { id: partId, expectedUpdatedAt: saved.updatedAt, part })),
+      problem: (text, code) => setStatus({ kind: 'problem', text, stale: code === 'STALE' }),
       saved: (part) => {
         const savedForm = partToForm(part, unit);
         // Keep the other kinds' typed text: only the saved kind is replaced by what the store holds.
@@ -118,7 +123,17 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
         </h1>
         {dirty ? <UnsavedBadge testId="unsaved" /> : null}
       </div>
-      {status ? <EditorStatus status={status} summary={summary} onDismiss={() => setStatus(null)} /> : null}
+      {status ? (
+        <EditorStatus
+          status={status}
+          summary={summary}
+          onDismiss={() => setStatus(null)}
+          onReload={() => {
+            setStatus(null);
+            setReloads((n) => n + 1);
+          }}
+        />
+      ) : null}
       <FieldErrorsContext.Provider value={errorsCtx}>
         <form className="engine-form part-form" onSubmit={(e) => void save(e)} noValidate aria-label={title}>
           <div className="groups">
@@ -138,7 +153,7 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
               Back to the parts
             </button>
             {partId !== null && saved ? (
-              <button type="button" className="danger push-right" onClick={() => del.ask({ id: partId, name: saved.name })}>
+              <button type="button" className="danger push-right" onClick={() => del.ask({ id: partId, name: saved.name, updatedAt: saved.updatedAt })}>
                 Delete this part
               </button>
             ) : null}

@@ -19,11 +19,14 @@ export function PartsList({ navigate, version }: Props): ReactNode {
   const { items: parts, setItems: setParts, problem, setProblem, done, setDone, reload } = useListScreen('parts.list', {}, version);
   const [shown, setShownState] = useState<Shown>(loadShown);
 
-  const del = useDeletePart((target) => {
-    setParts((list) => list?.filter((p) => p.id !== target.id) ?? list);
-    setDone(`${target.name} was deleted.`);
-    reload();
-  });
+  const del = useDeletePart(
+    (target) => {
+      setParts((list) => list?.filter((p) => p.id !== target.id) ?? list);
+      setDone(`${target.name} was deleted.`);
+      reload();
+    },
+    reload,
+  );
 
   const setShown = (v: Shown): void => {
     setShownState(v);
@@ -75,7 +78,7 @@ export function PartsList({ navigate, version }: Props): ReactNode {
                 {list.length === 0 ? (
                   <p className="empty">No {kindWords[k].many.toLowerCase()} on the shelf yet.</p>
                 ) : (
-                  <KindTable kind={k} parts={list} unit={unit} onEdit={edit} onDelete={(p) => del.ask({ id: p.id, name: p.name })} />
+                  <KindTable kind={k} parts={list} unit={unit} onEdit={edit} onDelete={(p) => del.ask({ id: p.id, name: p.name, updatedAt: p.updatedAt })} />
                 )}
               </section>
             );

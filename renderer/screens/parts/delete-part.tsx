@@ -8,19 +8,24 @@ import { call } from '../../app/bridge.js';
 import { useDeleteSteps, type DeleteTarget } from '../../app/delete-steps.js';
 import { Confirm, Dialog } from '../../app/Dialog.js';
 
-export function useDeletePart(onDone: (target: DeleteTarget) => void) {
-  const { target, stage, setStage, busy, setBusy, close, ask } = useDeleteSteps<{ step: 'refused'; message: string; inUse: boolean }>();
+/** `onStale`: the part changed or went since it was shown; called when the refusal is closed, to reload. */
+export function useDeletePart(onDone: (target: DeleteTarget) => void, onStale?: () => void) {
+  const { target, stage, setStage, busy, setBusy, close: closeSteps, ask } = useDeleteSteps<{ step: 'refused'; message: string; inUse: boolean; stale: boolean }>();
+  const close = (): void => {
+    if (stage.step === 'refused' && stage.stale) onStale?.();
+    closeSteps();
+  };
 
   const send = async (): Promise<void> => {
     if (!target) return;
     setBusy(true);
-    const r = await call('parts.delete', { id: target.id });
+    const r = await call('parts.delete', { id: target.id, expectedUpdatedAt: target.updatedAt });
     setBusy(false);
     if (r.ok) {
       close();
       return onDone(target);
     }
-    setStage({ step: 'refused', message: r.error.message, inUse: r.error.code === 'IN_USE' });
+    setStage({ step: 'refused', message: r.error.message, inUse: r.error.code === 'IN_USE', stale: r.error.code === 'STALE' || r.error.code === 'NOT_FOUND' });
   };
 
   const dialog: ReactNode =
@@ -44,7 +49,7 @@ export function useDeletePart(onDone: (target: DeleteTarget) => void) {
         testId="delete-part-refused"
         actions={
           <button type="button" data-autofocus onClick={close}>
-            Close
+            {stage.stale && onStale ? 'Close and reload the list' : 'Close'}
           </button>
         }
       >

@@ -60,8 +60,14 @@ export function ReadingEntry({ planId, step, readings, bands, onSaved, onDirty }
     }
     setErrors({});
     setBusy(true);
-    const res = editing ? await call('readings.update', { id: editing.id, reading: checked.data! }) : await call('readings.add', { reading: checked.data! });
+    const res = editing ? await call('readings.update', { id: editing.id, expectedUpdatedAt: editing.updatedAt, reading: checked.data! }) : await call('readings.add', { reading: checked.data! });
     setBusy(false);
+    if (!res.ok && res.error.code === 'STALE') {
+      // Changed elsewhere since the sheet was read: say so and show the sheet as it is now (typed values stay).
+      setEditing(null);
+      onSaved(res.error.message);
+      return;
+    }
     if (!res.ok) {
       const fields: Record<string, string> = {};
       for (const [k, m] of Object.entries(res.error.fields ?? {})) fields[k.replace(/^reading\./, '')] = m;
@@ -78,9 +84,10 @@ export function ReadingEntry({ planId, step, readings, bands, onSaved, onDirty }
   const remove = async (x: Reading): Promise<void> => {
     setAsking(null);
     setBusy(true);
-    const res = await call('readings.delete', { id: x.id });
+    const res = await call('readings.delete', { id: x.id, expectedUpdatedAt: x.updatedAt });
     setBusy(false);
-    if (!res.ok) setProblem(res.error.message);
+    if (!res.ok && (res.error.code === 'STALE' || res.error.code === 'NOT_FOUND')) onSaved(res.error.message);
+    else if (!res.ok) setProblem(res.error.message);
     else {
       if (editing?.id === x.id) {
         setEditing(null);

@@ -39,12 +39,12 @@ export function AmbientField({ engine, onSaved }: Props): ReactNode {
       if (!checked.success) return setMessage({ kind: 'problem', text: checked.error.issues[0]?.message ?? `${amb.label} could not be used.` });
     }
     if ((p.value ?? undefined) === stored) return setMessage({ kind: 'done', text: 'Already weighed at this air temperature.' });
-    const { id, ...rest } = current;
+    const { id, updatedAt, ...rest } = current;
     const conditions = { ...rest.conditions };
     if (p.value === null) delete conditions.ambientC;
     else conditions.ambientC = p.value;
     setBusy(true);
-    const r = await call('engines.update', { id, engine: { ...rest, conditions } });
+    const r = await call('engines.update', { id, expectedUpdatedAt: updatedAt, engine: { ...rest, conditions } });
     setBusy(false);
     if (!r.ok) {
       const beside = r.error.fields?.['engine.conditions.ambientC'];

@@ -22,6 +22,10 @@ type Props = {
   initial: PlanForm;
   /** Null for a new plan. */
   planId: number | null;
+  /** The stored plan's version (null for a new plan), sent with the save. */
+  updatedAt: string | null;
+  /** After a save refused as stale: close the editor and read the plans again. */
+  onReload: () => void;
   status: PlanStatus;
   /** True when the starting values are not saved anywhere yet (a shelf suggestion), so leaving asks first. */
   startsDirty?: boolean;
@@ -41,11 +45,12 @@ function choicesOf(parts: readonly Part[], none: string, value: string): Array<{
   return out;
 }
 
-export function PlanEditor({ engine, parts, initial, planId, status, startsDirty = false, onSaved, onClose, onDirty }: Props): ReactNode {
+export function PlanEditor({ engine, parts, initial, planId, updatedAt, status, startsDirty = false, onSaved, onClose, onDirty, onReload }: Props): ReactNode {
   const [unit] = useGapUnit();
   const [form, setForm] = useState<PlanForm>(initial);
   const [savedPrint, setSavedPrint] = useState(() => (startsDirty ? '' : planFingerprint(initial)));
   const [problem, setProblem] = useState<string | null>(null);
+  const [stale, setStale] = useState(false);
   const headingRef = useRef<HTMLHeadingElement>(null);
 
   useEffect(() => {
@@ -71,9 +76,12 @@ export function PlanEditor({ engine, parts, initial, planId, status, startsDirty
       send: (plan) => {
         if (planId === null) return call('plans.create', { plan });
         const { status: _status, ...fields } = plan;
-        return call('plans.update', { id: planId, plan: fields });
+        return call('plans.update', { id: planId, expectedUpdatedAt: updatedAt ?? '', plan: fields });
       },
-      problem: setProblem,
+      problem: (text, code) => {
+        setProblem(text);
+        setStale(code === 'STALE');
+      },
       saved: (plan) => {
         setProblem(null);
         setSavedPrint(planFingerprint(form));
@@ -101,6 +109,14 @@ export function PlanEditor({ engine, parts, initial, planId, status, startsDirty
       {problem ? (
         <Notice kind="problem" onDismiss={() => setProblem(null)} testId="plan-status">
           {problem}
+          {stale ? (
+            <>
+              {' '}
+              <button type="button" onClick={onReload} data-testid="reload-record">
+                Close and reload the plans
+              </button>
+            </>
+          ) : null}
           {Object.keys(summary).length > 0 ? (
             <ul className="error-summary">
               {Object.entries(summary).map(([path, message]) => (

@@ -2,7 +2,8 @@
  * "Best from the shelf": every module, coil and ballast in the parts bin tried on this engine,
  * the best few listed with their verdict and reserve, each one click from becoming a plan.
  */
-import type { ReactNode } from 'react';
+import { useEffect, useState, type ReactNode } from 'react';
+import { call } from '../../app/bridge.js';
 import type { SearchAnswer, ShelfSuggestion } from '../../../electron/ipc/channels.js';
 import { VerdictBadge } from './Verdict.js';
 import { number, ratioText, rpmText, verdictWords } from './words.js';
@@ -19,7 +20,7 @@ export function ShelfList({ answer, problem, busy, onMakePlan }: Props): ReactNo
     <section className="panel shelf" aria-labelledby="shelf-title" data-testid="shelf">
       <h2 id="shelf-title">Best from the shelf</h2>
       {problem ? <p className="field-error">{problem}</p> : null}
-      {busy && !answer ? <p className="quiet">Trying every combination in the parts bin…</p> : null}
+      {busy && !answer ? <SearchRunning /> : null}
       {answer ? (
         <>
           <p className="quiet">
@@ -75,5 +76,38 @@ export function ShelfList({ answer, problem, busy, onMakePlan }: Props): ReactNo
         </>
       ) : null}
     </section>
+  );
+}
+
+/**
+ * While the search runs (in a worker thread, so the rest of the app answers): how long it has run,
+ * asked once a second, and a way to stop it (the search then answers that it was stopped).
+ */
+function SearchRunning(): ReactNode {
+  const [seconds, setSeconds] = useState(0);
+  const [stopping, setStopping] = useState(false);
+  useEffect(() => {
+    const timer = setInterval(() => {
+      void call('check.progress', {}).then((r) => {
+        if (r.ok && r.value.running > 0) setSeconds(Math.round(r.value.elapsedMs / 1000));
+      });
+    }, 1000);
+    return () => clearInterval(timer);
+  }, []);
+  return (
+    <p className="quiet" data-testid="search-running">
+      Trying every combination in the parts bin…{seconds > 0 ? ` (${seconds} s so far)` : ''}{' '}
+      <button
+        type="button"
+        className="small"
+        disabled={stopping}
+        onClick={() => {
+          setStopping(true);
+          void call('check.cancel', {});
+        }}
+      >
+        Stop the search
+      </button>
+    </p>
   );
 }

@@ -30,7 +30,7 @@ import { todayText } from '../../app/today.js';
 import { figureText } from './words.js';
 
 type Props = { current: CurrentEngine | null; onEngineChosen: (e: CurrentEngine) => void; navigate: Navigate };
-type EditorState = { key: string; planId: number | null; status: PlanStatus; initial: PlanForm; startsDirty: boolean };
+type EditorState = { key: string; planId: number | null; updatedAt: string | null; status: PlanStatus; initial: PlanForm; startsDirty: boolean };
 
 let editorSerial = 0;
 
@@ -93,9 +93,9 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
   };
 
   const e = engine.value;
-  const newPlan = (): void => guarded(() => e && openEditor({ planId: null, status: 'draft', initial: blankPlanForm(e, unit), startsDirty: false }));
-  const editPlan = (p: Plan): void => guarded(() => openEditor({ planId: p.id, status: p.status, initial: planToForm(p, unit), startsDirty: false }));
-  const fromShelf = (s: ShelfSuggestion): void => guarded(() => e && openEditor({ planId: null, status: 'draft', initial: suggestionToForm(s, e, unit), startsDirty: true }));
+  const newPlan = (): void => guarded(() => e && openEditor({ planId: null, updatedAt: null, status: 'draft', initial: blankPlanForm(e, unit), startsDirty: false }));
+  const editPlan = (p: Plan): void => guarded(() => openEditor({ planId: p.id, updatedAt: p.updatedAt, status: p.status, initial: planToForm(p, unit), startsDirty: false }));
+  const fromShelf = (s: ShelfSuggestion): void => guarded(() => e && openEditor({ planId: null, updatedAt: null, status: 'draft', initial: suggestionToForm(s, e, unit), startsDirty: true }));
 
   const onSaved = (plan: Plan, created: boolean): void => {
     setEditor(null);
@@ -184,6 +184,12 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
               parts={parts}
               initial={editor.initial}
               planId={editor.planId}
+              updatedAt={editor.updatedAt}
+              onReload={() => {
+                setEditor(null);
+                setEditing({ dirty: false, name: '' });
+                setPlansVersion((v) => v + 1);
+              }}
               status={editor.status}
               startsDirty={editor.startsDirty}
               onSaved={onSaved}
