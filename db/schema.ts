@@ -199,6 +199,8 @@ export const coilFields = z.object({
    * checker's labelled default (about 35 kV for a canister coil, from memory).
    */
   ratedSecondaryKv: positive('Rated secondary voltage', 100).nullable().optional(),
+  /** Coupling between the windings, when the maker gives it; absent or null: the engine's condition. */
+  couplingK: numberOf('Coupling').gt(0.9, 'A coupling of 0.9 or less is not plausible for an ignition coil.').lt(1, 'The coupling must be below 1.').nullable().optional(),
 });
 /** How far a given turns ratio may stray from sqrt(Ls/Lp) when both are given (ideal-transformer relation, n^2 = Ls/Lp). */
 export const TURNS_RATIO_TOLERANCE = 0.1;

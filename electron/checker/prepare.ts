@@ -237,7 +237,8 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
   const plugOhm = setup.plug && setup.plug.resistor ? nonNeg(setup.plug.resistorOhm, 0) : 0;
   const rs = nonNeg(coil.secondaryResistanceOhm, 8000) + leadOhm + plugOhm;
   const damping = secondaryDampingFactor(rs, ls, cEff);
-  const kc = c.couplingK.value;
+  // The coil's own coupling when its maker gives one, else the engine's condition (a labelled default).
+  const kc = coil.couplingK ?? c.couplingK.value;
   const couplingK = Number.isFinite(kc) && kc > 0 && kc < 1 ? kc : DEFAULT_COUPLING_K.value;
   const fouledOhm = pos(c.fouledShuntOhm.value, 500_000, 'The fouled-plug shunt', issues);
 

@@ -96,7 +96,7 @@ function inputsOf(s: Session, a: Analysis): Figure[] {
   const coil = a.setup.coil;
   out.push({ name: 'coil primary resistance at 20 degC', value: coil.primaryResistanceOhm20C.value, unit: 'ohm', provenance: coil.primaryResistanceOhm20C.provenance });
   // Only the capacitive-discharge peak uses the coupling (its transfer rings through the leakage).
-  if (a.prep.cd) out.push({ name: 'coil coupling coefficient', value: a.prep.couplingK, unit: '', provenance: s.conditions.couplingK.provenance });
+  if (a.prep.cd) out.push({ name: 'coil coupling coefficient', value: a.prep.couplingK, unit: '', provenance: a.setup.coil.couplingK != null ? 'catalogue' : s.conditions.couplingK.provenance });
   const rated = coil.ratedSecondaryV;
   out.push(
     typeof rated === 'number' && rated > 0

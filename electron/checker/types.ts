@@ -125,6 +125,12 @@ export interface CoilSpec {
    * `secondaryCeilingV` condition (a labelled default).
    */
   ratedSecondaryV?: number | null;
+  /**
+   * Coupling between the windings (0.9 to 1, from the maker or a measurement of the two
+   * inductances). Absent or null: the `couplingK` condition (a labelled default). Only the
+   * capacitive-discharge peak uses it: its transfer rings through the leakage 2 (1 - k) Lp.
+   */
+  couplingK?: number | null;
 }
 
 export type BallastType = 'iron-wire' | 'ceramic' | 'harness-wire';

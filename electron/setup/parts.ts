@@ -37,6 +37,7 @@ export function coilSpec(c: Coil, readings?: readonly Reading[], readAtC = 20): 
     ratedVoltageV: c.ratedVoltageV,
     maxDissipationW: c.maxDissipationW,
     ratedSecondaryV: c.ratedSecondaryKv != null ? c.ratedSecondaryKv * 1000 : null,
+    couplingK: c.couplingK ?? null,
   };
 }
 

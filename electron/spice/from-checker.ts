@@ -62,7 +62,7 @@ export function circuitFromReport(spec: SetupSpec, report: SetupReport, rpm: num
       secondaryResistanceOhm: at.secondaryResistanceOhm,
     },
     cd: isCd && at.cd ? { capacitorF: at.cd.capacitorF, chargeVoltageV: at.cd.chargeVoltageV } : null,
-    // The engine's own coupling (its resolved working condition), so the deck draws what the checker used.
+    // The coupling the checker used: the coil's own when its maker gives one, else the engine's condition.
     couplingK: c.couplingK,
   };
 }

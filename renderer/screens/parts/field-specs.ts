@@ -26,6 +26,7 @@ export const fieldSpecs: Record<string, FieldSpec> = {
   secondaryInductanceH: { label: 'Secondary inductance', unit: 'H' },
   maxDissipationW: { label: 'Maximum dissipation', unit: 'W' },
   ratedSecondaryKv: { label: 'Rated secondary voltage', unit: 'kV' },
+  couplingK: { label: 'Coupling between the windings', unit: '' },
   coldResistanceOhm: { label: 'Cold resistance', unit: 'Ω' },
   thermalResistanceKPerW: { label: 'Thermal resistance', unit: 'K/W' },
   supplyMinV: { label: 'Lowest supply', unit: 'V' },

@@ -25,6 +25,7 @@ export type PartForm = {
     ratedVoltageV: '6' | '12';
     maxDissipationW: string;
     ratedSecondaryKv: string;
+    couplingK: string;
   };
   ballast: { ballastType: Ballast['ballastType']; coldResistanceOhm: string; thermalResistanceKPerW: string };
   module: {
@@ -60,7 +61,7 @@ export function blankPartForm(kind: PartKind): PartForm {
     kind,
     name: '',
     notes: '',
-    coil: { primaryResistanceOhm20C: '', primaryInductanceH: '', secondaryResistanceOhm: '', turnsRatio: '', secondaryInductanceH: '', forBallast: false, ratedVoltageV: '12', maxDissipationW: '', ratedSecondaryKv: '' },
+    coil: { primaryResistanceOhm20C: '', primaryInductanceH: '', secondaryResistanceOhm: '', turnsRatio: '', secondaryInductanceH: '', forBallast: false, ratedVoltageV: '12', maxDissipationW: '', ratedSecondaryKv: '', couplingK: '' },
     ballast: { ballastType: 'ceramic', coldResistanceOhm: '', thermalResistanceKPerW: '' },
     module: {
       moduleType: 'breakerless-current-limited',
@@ -109,6 +110,7 @@ export function partToForm(p: Part, unit: GapUnit): PartForm {
         ratedVoltageV: p.ratedVoltageV === 6 ? '6' : '12',
         maxDissipationW: shown('maxDissipationW', p.maxDissipationW),
         ratedSecondaryKv: shown('ratedSecondaryKv', p.ratedSecondaryKv ?? null),
+        couplingK: shown('couplingK', p.couplingK ?? null),
       };
       break;
     case 'ballast':
@@ -197,6 +199,7 @@ export function formToInput(f: PartForm, unit: GapUnit): FormCheck {
         ratedVoltageV: c.ratedVoltageV === '6' ? 6 : 12,
         maxDissipationW: opt('maxDissipationW', c.maxDissipationW),
         ratedSecondaryKv: opt('ratedSecondaryKv', c.ratedSecondaryKv),
+        couplingK: opt('couplingK', c.couplingK),
       };
       break;
     }

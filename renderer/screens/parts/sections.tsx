@@ -59,6 +59,14 @@ export function CoilSections({ form, update }: Props): ReactNode {
           onChange={set('ratedSecondaryKv')}
           hint="The most the coil's insulation is made for; blank uses the default for its kind (from memory)"
         />
+        <TextField
+          path="couplingK"
+          label="Coupling between the windings (optional, 0.9 to 1)"
+          numeric
+          value={c.couplingK}
+          onChange={set('couplingK')}
+          hint="From the maker; it moves a capacitive-discharge spark by up to a quarter. Blank uses the engine's working condition (0.995, from memory)"
+        />
       </Group>
     </>
   );
