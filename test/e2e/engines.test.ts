@@ -302,7 +302,7 @@ describe('the engines screen', () => {
     await page.getByRole('dialog', { name: 'Leave without saving?' }).getByRole('button', { name: 'Leave and lose the changes' }).click();
     await page.getByRole('heading', { level: 1, name: 'Wiring sheet' }).waitFor();
     // The sheet screen offers the engine to pick (the sheet itself is tested in sheet.test.ts).
-    expect(await page.getByLabel('Engine', { exact: true }).count()).toBe(1);
+    await page.getByLabel('Engine', { exact: true }).waitFor();
   });
 
   it('shows gaps in inches on request while storing millimetres', async () => {

@@ -18,6 +18,10 @@ const allowedShared = new Set([
   path.join(projectRoot, 'electron', 'ipc', 'check-shapes.ts'),
   // The wiring sheet's shapes; channels.ts re-exports them, and they import only zod.
   path.join(projectRoot, 'electron', 'ipc', 'sheet-shapes.ts'),
+  // The records screen's shapes (backups, workshop files, CSV); re-exported by channels.ts, they import zod and schema.ts.
+  path.join(projectRoot, 'electron', 'ipc', 'records-shapes.ts'),
+  // The text rules schema.ts applies to what is typed (invisible, control and direction characters); type-only zod import.
+  path.join(projectRoot, 'db', 'text-rules.ts'),
 ]);
 
 function sourceFiles(dir: string): string[] {
