@@ -1,40 +1,21 @@
 /**
  * What the wiring-sheet screen receives: the sheet as `buildSheet` makes it (the model in
  * electron/checklist/types.ts), the ticks, the readings judged against their steps, and the
- * progress. These schemas import only zod, so the renderer may use them through channels.ts; the
- * dispatcher checks every answer against them. `sheet-shapes-check.ts` fails the type check when
+ * progress. These schemas import only zod and the store's schema, so the renderer may use them
+ * through channels.ts; the dispatcher checks every answer against them. `sheet-shapes-check.ts` fails the type check when
  * a shape here and its type in electron/checklist/types.ts drift apart.
  */
 import { z } from 'zod';
+import { planStatus, readingQuantities } from '../../db/schema.js';
 
 const id = z.number().int().positive();
 const finite = z.number().finite();
 const count = z.number().int().min(0);
 
-/** The same list as `readingQuantities` in db/schema.ts and `ReadingQuantity` in the checklist. */
-export const sheetReadingQuantity = z.enum([
-  'battery-voltage-resting',
-  'coil-primary-resistance',
-  'coil-secondary-resistance',
-  'ballast-resistance',
-  'ht-lead-resistance',
-  'key-on-current',
-  'coil-feed-voltage-key-on',
-  'coil-switch-voltage-key-on',
-  'coil-voltage-after-shut-off',
-  'supply-voltage-cranking',
-  'coil-feed-voltage-cranking',
-  'module-supply-voltage-cranking',
-  'supply-voltage-running',
-  'dwell-angle',
-  'tach-idle-rpm',
-  'timing-idle',
-  'timing-advanced',
-  'plug-gap',
-  'other',
-]);
+/** The store's list (db/schema.ts), which `ReadingQuantity` in the checklist must equal (sheet-shapes-check.ts). */
+export const sheetReadingQuantity = z.enum(readingQuantities);
 export const workshopUnit = z.enum(['V', 'A', 'ohm', 'kohm', 'deg', 'rpm', 'mm', '']);
-export const sheetPlanStatus = z.enum(['draft', 'checked', 'wired', 'done']);
+export const sheetPlanStatus = planStatus;
 export const stageId = z.enum(['magneto', 'before', 'measure', 'fit', 'static', 'cranking', 'running', 'finish']);
 
 export const expectedReading = z.object({

@@ -16,7 +16,7 @@ const allowedShared = new Set([
   path.join(projectRoot, 'electron', 'ipc', 'channels.ts'),
   // The checker answers' shapes; channels.ts re-exports them, and they import only zod.
   path.join(projectRoot, 'electron', 'ipc', 'check-shapes.ts'),
-  // The wiring sheet's shapes; channels.ts re-exports them, and they import only zod.
+  // The wiring sheet's shapes; channels.ts re-exports them, and they import zod and schema.ts.
   path.join(projectRoot, 'electron', 'ipc', 'sheet-shapes.ts'),
   // The records screen's shapes (backups, workshop files, CSV); re-exported by channels.ts, they import zod and schema.ts.
   path.join(projectRoot, 'electron', 'ipc', 'records-shapes.ts'),
