@@ -1,12 +1,8 @@
 /** Plain words, units and number formats for the "weigh a combination" screen. */
-import type { VerdictValue } from '../../../electron/ipc/channels.js';
 import { gapText, unitLabel, type GapUnit } from '../../app/units.js';
 
-/** Our own words for the three verdicts; each also has an icon shape and a colour. */
-export const verdictWords: Record<VerdictValue, string> = { pass: 'Fine', caution: 'Take care', fail: 'Not like this' };
-export const verdictIcons: Record<VerdictValue, string> = { pass: '✓', caution: '!', fail: '✕' };
-
-export const statusWords = { draft: 'Idea', checked: 'Weighed', wired: 'Wired in', done: 'Finished' } as const;
+/** Our own words for the verdicts (each also has an icon shape and a colour) and the plan statuses: one list, shared with the sheet. */
+export { statusWords, verdictIcons, verdictWords } from '../../sheet/format.js';
 
 /** The two places a module can take its own supply, in plain words. */
 export const feedChoices = [
