@@ -55,8 +55,13 @@ function runChild(args: string[], killAfterMs: number | null): Promise<Run> {
   });
 }
 
+/**
+ * Opens the file the way the next start does (read-write, so SQLite replays a write-ahead log a kill
+ * left behind; a read-only connection cannot rebuild the log's index and says "attempt to write a
+ * readonly database"), then reads it.
+ */
 function inspect(file: string): { integrity: string; engines: string[] } {
-  const db = new Database(file, { readonly: true, fileMustExist: true });
+  const db = new Database(file, { fileMustExist: true });
   try {
     return {
       integrity: String(db.pragma('integrity_check', { simple: true })),
