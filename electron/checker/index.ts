@@ -23,7 +23,7 @@ export { COPPER_ALPHA_PER_K, copperResistanceOhm, copperResistanceAt20COhm, fina
 export { IRON_RESISTIVITY_TABLE, ironResistivityMicroOhmCm, ironBallastResistanceOhm, selfHeatedTemperatureK } from './thermal.js';
 export { chargeCurrentA, timeToReachS, inductorEnergyJ, meanSquareCurrentA2 } from './charge.js';
 export { sparkRateHz, dwellFractionFromAngle, floatedDwellFraction, currentLimitedDwellS } from './dwell.js';
-export { turnsRatio, effectiveSecondaryCapacitanceF, availableSecondaryV, voltsPerAmp, secondaryRiseTimeS, inductiveSparkDurationS, seriesRlcOpening, secondaryDampingFactor, inductiveSparkEnergyJ, type SeriesRlcResponse } from './secondary.js';
+export { turnsRatio, effectiveSecondaryCapacitanceF, availableSecondaryV, voltsPerAmp, secondaryRiseTimeS, inductiveSparkDurationS, secondaryDampingFactor, inductiveSparkEnergyJ } from './secondary.js';
 export { parallelRlcPeakVPerA, cdFouledFraction, reflectedShuntOhm, fouledChargeTauS, fouledTimeToLimitS, fouledFluxCurrentA } from './fouled.js';
 export { capacitorEnergyJ, rechargeTimeS, cdChargeVoltageV, cdSecondaryPeakV, cdSparkDurationS, leakageInductanceH, cdTransferDampingRatio, cdOvershootFraction, cdRiseTimeS, cdSparkEnergyJ, cdEnergyFallsFromRpm, type CdTransferLoop } from './cd.js';
 export { volumeRatioAtAngle, sweptVolumeM3, clearanceVolumeM3 } from './geometry.js';

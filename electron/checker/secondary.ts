@@ -2,6 +2,7 @@
  * The secondary side of an inductive coil: the voltage it can reach, how fast, and how long the
  * spark lasts once the gap has broken down.
  */
+import { inductorEnergyJ } from './charge.js';
 
 /** Turns ratio from n if given, else sqrt(Ls / Lp) (both windings share one core). */
 export function turnsRatio(n: number | null, secondaryInductanceH: number | null, primaryInductanceH: number): number {
@@ -53,31 +54,6 @@ export function inductiveSparkDurationS(secondaryInductanceH: number, seriesResi
 }
 
 /**
- * The points condenser and primary as a series RLC after the points open: the textbook damped
- * response (Alexander & Sadiku, Example 8.16). Returns alpha, the damped frequency and the first
- * extreme of the primary voltage about the supply, for a current `i0` flowing at opening.
- * v(t) = Vs - (i0 / (C wd)) e^(-alpha t) sin(wd t) when starting with the capacitor at the supply.
- */
-export interface SeriesRlcResponse {
-  alphaPerS: number;
-  dampedOmegaRadPerS: number;
-  firstPeakS: number;
-  /** First extreme of the primary voltage relative to the supply (negative: below it). */
-  firstPeakV: number;
-}
-
-export function seriesRlcOpening(resistanceOhm: number, inductanceH: number, capacitanceF: number, i0A: number): SeriesRlcResponse {
-  const alpha = resistanceOhm / (2 * inductanceH);
-  const w0sq = 1 / (inductanceH * capacitanceF);
-  const wd = Math.sqrt(Math.max(0, w0sq - alpha * alpha));
-  if (!(wd > 0)) return { alphaPerS: alpha, dampedOmegaRadPerS: 0, firstPeakS: 0, firstPeakV: 0 };
-  // d/dt [e^(-at) sin(wt)] = 0 at tan(wt) = w/a.
-  const t = Math.atan2(wd, alpha) / wd;
-  const v = -(i0A / (capacitanceF * wd)) * Math.exp(-alpha * t) * Math.sin(wd * t);
-  return { alphaPerS: alpha, dampedOmegaRadPerS: wd, firstPeakS: t, firstPeakV: v };
-}
-
-/**
  * What the secondary's series resistance (winding, lead, plug resistor) takes off the inductive
  * peak. After the break the secondary is a source-free series RLC (Ls, Rs, C) whose inductor starts
  * with the current at break over n and whose capacitor starts empty:
@@ -125,7 +101,7 @@ export function inductiveSparkEnergyJ(secondaryInductanceH: number, seriesResist
  */
 export function inductiveSparkEnergyGivenDurationJ(secondaryInductanceH: number, seriesResistanceOhm: number, initialSecondaryA: number, arcV: number, durationS: number): number {
   if (!(initialSecondaryA > 0) || !(arcV > 0)) return 0;
-  const stored = 0.5 * secondaryInductanceH * initialSecondaryA * initialSecondaryA;
+  const stored = inductorEnergyJ(secondaryInductanceH, initialSecondaryA);
   if (!(seriesResistanceOhm > 0)) return stored;
   const x = (seriesResistanceOhm * initialSecondaryA) / arcV;
   if (x >= 1e-2 && durationS === durationS) {

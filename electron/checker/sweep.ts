@@ -5,13 +5,13 @@
  * of combinations without allocating in the loop.
  */
 import { moduleCutOut, noSparkPoint } from './no-spark.js';
-import { cdChargeVoltageV } from './cd.js';
-import { chargeCurrentA, timeToReachS } from './charge.js';
+import { capacitorEnergyJ, cdChargeVoltageV } from './cd.js';
+import { chargeCurrentA, inductorEnergyJ, timeToReachS } from './charge.js';
 import { airBreakdownV, paschenBreakdownFromReducedV } from './breakdown.js';
 import { cdFouledFraction, fouledChargeTauS, fouledFluxCurrentA, fouledTimeToLimitS, reflectedShuntOhm } from './fouled.js';
 import { magnetoBreakCurrentA } from './magneto.js';
 import { finalCurrentA } from './primary.js';
-import { inductiveSparkDurationS } from './secondary.js';
+import { availableSecondaryV, inductiveSparkDurationS } from './secondary.js';
 import type { RpmGrid } from './grid.js';
 import type { PreparedSetup } from './prepare.js';
 import { dwellGivenLimitTimeS, DwellMode } from './timing.js';
@@ -179,15 +179,17 @@ function cdPoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: 
     let multi = 0;
     let moduleW = 0;
     let dead = 0;
+    let energy = 0;
     if (cd) {
       const modSupply = (cranking ? p.moduleSupplyCrankingV : resting ? p.moduleSupplyRestingV : p.moduleSupplyRunningV) ?? supply;
       dead = modSupply > cd.cutOutV ? 0 : 1; // the charger stops at its cut-out: no spark (no-spark.ts)
       v = cdChargeVoltageV(cd.nominalV, cd.capacitorF, cd.chargerPowerW, period, modSupply, cd.supplyMinV, cd.cutOutV);
       multi = cd.multiSparkBelowRpm !== null && rpm < cd.multiSparkBelowRpm ? 1 : 0;
+      // 0.5 C V^2, the one capacitor-energy law (cd.ts).
+      energy = capacitorEnergyJ(cd.capacitorF, v);
       // Converter loss, taking a 70 % efficient charger (from memory).
-      moduleW = ((0.5 * cd.capacitorF * v * v) / period) * (0.3 / 0.7);
+      moduleW = (energy / period) * (0.3 / 0.7);
     }
-    const energy = cd ? 0.5 * cd.capacitorF * v * v : 0;
     let uncapped = cd ? (cranking ? cd.peakPerChargeCrankingV : cd.peakPerChargeV) * v : 0;
     if (uncapped > clampCapVP) uncapped = clampCapVP;
     const peak = uncapped > ceilingVP ? ceilingVP : uncapped;
@@ -404,9 +406,10 @@ function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankin
         }
       }
     }
-    const energy = 0.5 * primaryInductanceHP * current * current;
-    let uncapped = current * peakVPerAP;
-    if (uncapped > clampCapVP) uncapped = clampCapVP;
+    // 0.5 L i^2, the one inductor-energy law (charge.ts).
+    const energy = inductorEnergyJ(primaryInductanceHP, current);
+    // i sqrt(Lp / C_eff) eta (damping folded into peakVPerA), capped at the clamp n V_clamp (secondary.ts).
+    const uncapped = availableSecondaryV(current, peakVPerAP, 1, clampCapVP);
     const available = uncapped > ceilingVP ? ceilingVP : uncapped;
     // A magneto's fouled peak keeps its clean break current (its armature is not a battery RL charge).
     let fouled = (magneto ? current : lastFluxA) * fouledVPerAP;

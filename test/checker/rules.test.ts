@@ -398,11 +398,13 @@ describe('module-heat', () => {
     expect(why).toMatch(/^[A-Z].* module.*\.$/);
     expect(why.split(' ').length).toBeGreaterThan(5);
   });
-  it('cautions or fails a current-limited module holding the limit long on a low-resistance coil', () => {
-    // Held 3 ms at 5 A: (14 - 1.5 - 5 x 0.6) x 5 = 47.5 W for 3 ms of each 5 ms period at redline.
+  it('cautions a current-limited module holding the limit long on a low-resistance coil', () => {
+    // Held at 5 A: (14 - 1.5 - 5 x 0.594) x 5 = 47.6 W for the held part of the dwell, plus the
+    // 1.5 V drop's 3.75 W over the dwell; at most about 29 W near 5 500 rpm, where t_l + 3 ms just
+    // fits 0.8 of the period: over 15 W, under 30 W, a caution (worked rpm by rpm in thresholds.test.ts).
     const low = coil({ primaryResistanceOhm20C: { value: 0.4, provenance: 'catalogue' }, primaryInductanceH: 0.003 });
     const v = verdict(checkSetup(fourCylinder, moduleSetup(module({ currentLimitA: 5, maxCurrentA: 40, minCoilResistanceOhm: 0 }), { coil: low }), { currentLimitHoldS: { value: 3e-3, provenance: 'measured' } }), 'module-heat');
-    expect(['caution', 'fail']).toContain(v);
+    expect(v).toBe('caution');
   });
   it('passes a current-limited module with dwell control on the same coil (it holds the limit only briefly)', () => {
     const low = coil({ primaryResistanceOhm20C: { value: 0.4, provenance: 'catalogue' }, primaryInductanceH: 0.003 });

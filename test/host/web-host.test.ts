@@ -151,10 +151,13 @@ describe('browser host: static files', () => {
     const js = await rawRequest(host.port, { path: script! });
     expect(js.status).toBe(200);
     expect(js.headers['content-type']).toBe('text/javascript; charset=utf-8');
-    if (style) {
-      const css = await rawRequest(host.port, { path: style });
-      expect(css.headers['content-type']).toBe('text/css; charset=utf-8');
-    }
+    // The renderer's build always links its stylesheet (renderer/styles/app.css, bundled): a page
+    // without one would be unstyled, so its absence fails rather than skips.
+    expect(style, 'the built page links a stylesheet').toBeDefined();
+    const css = await rawRequest(host.port, { path: style! });
+    expect(css.status).toBe(200);
+    expect(css.headers['content-type']).toBe('text/css; charset=utf-8');
+    expect(css.body).toBe(readFileSync(path.join(path.dirname(builtIndex), style!), 'utf8'));
   });
 
   it.each([

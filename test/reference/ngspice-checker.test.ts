@@ -80,13 +80,28 @@ for (const s of setups.filter((x) => x.spec.switching !== 'capacitive-discharge'
 
 for (const s of setups.filter((x) => x.spec.switching === 'capacitive-discharge')) {
   describe(s.label, () => {
-    it('agrees on the capacitor energy within 1 % and the first secondary peak within 5 %', () => {
+    it('moves the capacitor energy into the coil (v i integrated by ngspice) within 1 %, and agrees on the first secondary peak within 5 %', () => {
       for (const p of threeRunningPoints(s.report)) {
         const want = checkerFigures(s.report, p);
         const deck = buildDeck(circuitFromReport(s.spec, s.report, p.rpm), 'cd');
-        const m = runNgspice(deck.text, deck.measures).measures;
-        expect(ratio(m.ecap_j!.value, want.storedEnergyJ), `energy at ${rpmText(p.rpm)}`).toBeGreaterThan(0.99);
-        expect(ratio(m.ecap_j!.value, want.storedEnergyJ), `energy at ${rpmText(p.rpm)}`).toBeLessThan(1.01);
+        const first = runNgspice(deck.text, deck.measures).measures;
+        // The deck's starting charge is the report's own (0.5 C V^2 from the checker's voltage), so
+        // comparing ecap_j with the report would compare two copies; the hand-worked charge voltages
+        // are in ngspice-independent.test.ts. Here ngspice's own vectors must show that energy
+        // leaving the capacitor and entering the coil: the integral of v(coil15) i(primary) from the
+        // firing to the first peak against 0.5 C (V_fire^2 - V_peak^2).
+        const tPeak = first.vpeak_v!.atS!;
+        const extra = [
+          `.meas tran vc_fire FIND par('v(ca) - v(coil15)') AT=${deck.eventS}`,
+          `.meas tran vc_peak FIND par('v(ca) - v(coil15)') AT=${tPeak}`,
+          `.meas tran ecoil_in INTEG par('v(coil15) * i(Vsense)') FROM=${deck.eventS} TO=${tPeak}`,
+        ];
+        const m = runNgspice(deck.text.replace('.control\n', `${extra.join('\n')}\n.control\n`), [...deck.measures, 'vc_fire', 'vc_peak', 'ecoil_in']).measures;
+        const c = s.report.circuit.cd?.capacitorF ?? 0;
+        const out = 0.5 * c * (m.vc_fire!.value ** 2 - m.vc_peak!.value ** 2);
+        expect(ratio(m.ecoil_in!.value, out), `energy into the coil at ${rpmText(p.rpm)}`).toBeGreaterThan(0.99);
+        expect(ratio(m.ecoil_in!.value, out), `energy into the coil at ${rpmText(p.rpm)}`).toBeLessThan(1.01);
+        expect(ratio(0.5 * c * m.vc_fire!.value ** 2, want.storedEnergyJ), `energy at ${rpmText(p.rpm)}`).toBeGreaterThan(0.99);
         const r = ratio(m.vpeak_v!.value, want.losslessPeakV);
         const msg = `CD peak at ${rpmText(p.rpm)}: ngspice ${m.vpeak_v!.value.toFixed(0)} V, checker ${want.losslessPeakV.toFixed(0)} V`;
         expect(r, msg).toBeGreaterThan(0.95);

@@ -2,7 +2,7 @@
  * The checker's figures that ngspice can reproduce, at one sweep point. ngspice simulates the
  * circuit without the checker's transfer efficiency (a labelled allowance for the core losses
  * neither side draws), so the secondary peaks compared are the checker's before the efficiency:
- * its peak divided by the efficiency, and never above the clamp (n x V_clamp), which is a hard
+ * its peak divided by the efficiency (the test's own 0.8, below), and never above the clamp (n x V_clamp), which is a hard
  * physical limit in both. For an inductive coil that is the lossless peak; for a CD firing it
  * already carries the damping of the transfer loop (winding resistance and leakage, cd.ts), which
  * ngspice draws too. The names keep "lossless" for "without the efficiency".
@@ -16,10 +16,21 @@ export interface CheckerFigures {
   losslessFouledPeakV: number;
 }
 
+/**
+ * The checker's coil transfer efficiency, held here as its own copy rather than read from the
+ * report (dividing by the report's own figure would let a wrong efficiency cancel out): 0.8, the
+ * labelled default of the `transferEfficiency` condition in electron/checker/conditions.ts,
+ * "default (from memory)", an allowance for the core's eddy-current and hysteresis losses that
+ * neither the closed forms nor the decks draw (design notes, checker-models.md section 6: "a coil
+ * property; default from memory, labelled"). No published source: from memory. No demo engine
+ * overrides it.
+ */
+export const TRANSFER_EFFICIENCY = 0.8;
+
 export function checkerFigures(report: SetupReport, p: OperatingPoint): CheckerFigures {
   const c = report.circuit;
   const cap = c.primaryClampV !== null ? c.turnsRatio * c.primaryClampV : Infinity;
-  const eta = c.transferEfficiency;
+  const eta = TRANSFER_EFFICIENCY;
   const lossless = (v: number): number => (v >= cap ? cap : Math.min(v / eta, cap));
   return {
     currentAtBreakA: p.currentAtBreakA,
