@@ -178,9 +178,19 @@ export const engine = engineFields.extend({ id, updatedAt: z.string() }).superRe
 // ---------------------------------------------------------------------------------------------
 // Parts: one kind each, told apart by `kind`.
 
+/** The most of one part the shelf may hold (a number this large is a typing slip). */
+export const PART_QUANTITY_MAX = 999;
+
 const partBase = {
   name: z.string().trim().min(1, 'Give the part a name.').max(120, 'Keep the name under 120 characters.'),
   notes: text(2000),
+  /** How many of this part the shelf holds (migration 005); left out, it is one. */
+  quantity: z
+    .number({ error: 'How many you have must be a whole number.' })
+    .int('How many you have must be a whole number.')
+    .min(1, 'How many you have must be at least 1 (delete the part when none is left).')
+    .max(PART_QUANTITY_MAX, `How many you have must be ${PART_QUANTITY_MAX} or fewer.`)
+    .default(1),
 };
 
 export const coilFields = z.object({
@@ -565,7 +575,12 @@ const readingFields = z.strictObject({
   /** Blank only for 'other'; checked against the quantity below. */
   unit: z.string().trim().max(16, 'Keep the unit under 16 characters.'),
   takenOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Write the date as YYYY-MM-DD.'),
-  note: text(500),
+  /**
+   * The same limit as a stored reading's: migration 002 put a sentence of about 100 characters
+   * before the note of a reading it could not convert, and such a note must survive a workshop file
+   * going out and coming back in.
+   */
+  note: text(1000),
 });
 
 /**
@@ -600,7 +615,7 @@ export const readingInput = readingFields.superRefine((r, ctx) => {
  * converted the older rows). The note may be longer than a form allows because migration 002
  * prefixes a sentence to the note of a reading it had to move to 'other'.
  */
-export const reading = readingFields.extend({ id, note: text(1000), updatedAt: z.string() }).superRefine((r, ctx) => {
+export const reading = readingFields.extend({ id, updatedAt: z.string() }).superRefine((r, ctx) => {
   const target = readingUnits[r.quantity];
   if (target !== '' && r.unit !== target) {
     ctx.addIssue({ code: 'custom', path: ['unit'], message: `${readingWords[r.quantity]} is kept in ${target}, but this row says ${r.unit || 'no unit'}.` });
@@ -617,6 +632,67 @@ export const stepKey = z
 /** A ticked step of a plan's wiring sheet; `tickedOn` is when it was ticked (ISO 8601). */
 export const sheetTick = z.strictObject({ planId: id, stepKey, tickedOn: z.string() });
 
+// ---------------------------------------------------------------------------------------------
+// Settings: what the person chose, kept in the store (migration 005, db/repositories/settings.ts).
+
+export const lengthUnits = ['mm', 'inch'] as const;
+/** The screens a reload or a new start may return to (renderer/app/routes.ts names them). */
+export const settingScreens = ['engines', 'parts', 'combination', 'sheet', 'records'] as const;
+/** At most this many plans are ticked to weigh at once (besides the ignition fitted now). */
+export const MAX_WEIGHED_PLANS = 3;
+
+/** One schema per key; a key not listed here is refused, never dropped. */
+export const settingShapes = {
+  /** Gaps and lengths shown and typed in millimetres or inches (stored values stay mm). */
+  lengthUnit: z.enum(lengthUnits, { error: 'The length unit is "mm" or "inch".' }),
+  /** The engine being worked on (the top bar's "Working on"), or null for none yet. */
+  workingEngineId: z
+    .number({ error: 'The engine being worked on is an engine id (a whole number above zero), or null.' })
+    .int('The engine being worked on is an engine id (a whole number above zero), or null.')
+    .positive('The engine being worked on is an engine id (a whole number above zero), or null.')
+    .nullable(),
+  /** The weighing screen's ticked plans, per engine: engine id (as text) -> up to three plan ids. */
+  weighTicks: z.record(
+    z.string().regex(/^[1-9][0-9]{0,15}$/, 'Each key of the ticked plans must be an engine id.'),
+    z
+      .array(id, { error: 'The ticked plans of an engine are a list of plan ids.' })
+      .max(MAX_WEIGHED_PLANS, `Tick at most ${MAX_WEIGHED_PLANS} plans of one engine.`)
+      .refine((ids) => new Set(ids).size === ids.length, 'Each plan can be ticked only once.'),
+    { error: 'The ticked plans are a map from engine id to a list of plan ids.' },
+  ),
+  /** The first-run guide on the first screen is put away. */
+  firstRunHidden: z.boolean({ error: 'Whether the first-run guide is hidden is true or false.' }),
+  /** The screen the person was last on, opened again at the next start. */
+  lastScreen: z.enum(settingScreens, { error: `The last screen is one of ${settingScreens.join(', ')}.` }),
+} as const;
+
+export const settings = z.strictObject(settingShapes);
+/**
+ * What 'settings.set' takes: any of the keys, each checked. An unknown key is refused (not dropped),
+ * with the key itself as the field so the message sits on it.
+ */
+export const settingsPatch = z
+  .looseObject(settingShapes)
+  .partial()
+  .superRefine(
+    (v, ctx) => {
+      for (const key of Object.keys(v)) {
+        if (!Object.hasOwn(settingShapes, key)) {
+          ctx.addIssue({ code: 'custom', path: [key], message: `There is no setting called “${key}”; the settings are ${Object.keys(settingShapes).join(', ')}.` });
+        }
+      }
+    },
+    // Also when a known key is wrong, so every problem is listed at once.
+    { when: (payload) => typeof payload.value === 'object' && payload.value !== null && !Array.isArray(payload.value) },
+  )
+  .transform((v): Partial<Settings> => v);
+export type Settings = z.infer<typeof settings>;
+export type SettingsPatch = Partial<Settings>;
+export type SettingKey = keyof Settings;
+export const settingKeys = Object.keys(settingShapes) as SettingKey[];
+/** What a key holds until it is first set. */
+export const settingDefaults: Settings = { lengthUnit: 'mm', workingEngineId: null, weighTicks: {}, firstRunHidden: false, lastScreen: 'engines' };
+
 export type AdvancePoint = z.infer<typeof advancePoint>;
 export type ConditionOverrides = z.infer<typeof conditionOverrides>;
 export type ExistingSetup = z.infer<typeof existingSetup>;
@@ -629,7 +705,8 @@ export type IgnitionModule = z.infer<typeof ignitionModule>;
 export type Tach = z.infer<typeof tach>;
 export type Leads = z.infer<typeof leads>;
 export type Plug = z.infer<typeof plug>;
-export type PartInput = z.infer<typeof partInput>;
+/** What may be sent: `quantity` may be left out (it is then 1). */
+export type PartInput = z.input<typeof partInput>;
 export type Part = z.infer<typeof part>;
 export type PartKind = z.infer<typeof partKind>;
 export type PlanInput = z.infer<typeof planInput>;

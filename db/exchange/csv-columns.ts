@@ -20,6 +20,8 @@ export type Column = {
 
 const name: Column = { key: 'name', header: 'name', label: 'name', type: 'text' };
 const notes: Column = { key: 'notes', header: 'notes', label: 'notes', type: 'text' };
+/** How many are on the shelf (added with store version 5): a file without the column, or a blank, means one. */
+const quantity: Column = { key: 'quantity', header: 'how many', label: 'how many you have', type: 'number-or-blank', optional: true };
 
 export const csvColumns: Record<PartKind, readonly Column[]> = {
   coil: [
@@ -34,6 +36,7 @@ export const csvColumns: Record<PartKind, readonly Column[]> = {
     { key: 'ratedVoltageV', header: 'rated voltage (V)', label: 'rated voltage', type: 'number' },
     { key: 'maxDissipationW', header: 'maximum dissipation (W)', label: 'maximum dissipation', type: 'number-or-blank' },
     { key: 'ratedSecondaryKv', header: 'rated secondary voltage (kV)', label: 'rated secondary voltage', type: 'number-or-blank', optional: true },
+    quantity,
   ],
   ballast: [
     name,
@@ -41,6 +44,7 @@ export const csvColumns: Record<PartKind, readonly Column[]> = {
     { key: 'ballastType', header: 'ballast type', label: 'ballast type', type: 'choice', choices: ['iron-wire', 'ceramic', 'harness-wire'] },
     { key: 'coldResistanceOhm', header: 'cold resistance (ohm)', label: 'cold resistance', type: 'number' },
     { key: 'thermalResistanceKPerW', header: 'thermal resistance (K/W)', label: 'thermal resistance', type: 'number-or-blank' },
+    quantity,
   ],
   module: [
     name,
@@ -70,13 +74,15 @@ export const csvColumns: Record<PartKind, readonly Column[]> = {
     { key: 'cd.chargeVoltageV', header: 'CD charge voltage (V)', label: 'CD charge voltage', type: 'number-or-blank' },
     { key: 'cd.chargerPowerW', header: 'CD charger power (W)', label: 'CD charger power', type: 'number-or-blank' },
     { key: 'cd.multiSparkBelowRpm', header: 'CD multi-spark below (rpm)', label: 'CD multi-spark below', type: 'number-or-blank' },
+    quantity,
   ],
-  tach: [name, notes, { key: 'senses', header: 'senses', label: 'senses', type: 'choice', choices: ['coil-supply-current', 'coil-negative-pulses', 'module-output', 'cable'] }],
+  tach: [name, notes, { key: 'senses', header: 'senses', label: 'senses', type: 'choice', choices: ['coil-supply-current', 'coil-negative-pulses', 'module-output', 'cable'] }, quantity],
   leads: [
     name,
     notes,
     { key: 'core', header: 'core', label: 'core', type: 'choice', choices: ['copper', 'carbon', 'spiral'] },
     { key: 'resistancePerLeadOhm', header: 'resistance per lead (ohm)', label: 'resistance per lead', type: 'number' },
+    quantity,
   ],
   plug: [
     name,
@@ -85,5 +91,6 @@ export const csvColumns: Record<PartKind, readonly Column[]> = {
     { key: 'resistorOhm', header: 'resistor (ohm)', label: 'resistor', type: 'number' },
     { key: 'gapMinMm', header: 'smallest gap (mm)', label: 'smallest gap', type: 'number' },
     { key: 'gapMaxMm', header: 'largest gap (mm)', label: 'largest gap', type: 'number' },
+    quantity,
   ],
 };

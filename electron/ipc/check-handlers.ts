@@ -13,6 +13,7 @@ import { comparisonInput, latestReading, searchInput, SetupAdapterError } from '
 import type { ComparisonAnswer, SearchAnswer, ShownFigure } from './check-shapes.js';
 import { shownConditions, shownSetup } from './check-view.js';
 import { AppFailure } from './failure.js';
+import { shelfStock } from './shelf-stock.js';
 
 const cautions = (): ComparisonAnswer['cautions'] => ignitionCautions.map((c) => ({ id: c.id, text: c.text }));
 
@@ -75,7 +76,10 @@ export async function searchShelf(
   run: (input: SearchInput) => Promise<SearchResult> = async (input) => searchBest(input),
 ): Promise<SearchAnswer> {
   const engine = repos.engines.get(req.engineId);
-  const parts: Part[] = repos.parts.list();
+  // Parts that plans marked as fitted on other engines use up are left out (shelf-stock.ts).
+  const engineNames = new Map(repos.engines.list().map((e) => [e.id, e.name] as const));
+  const stock = shelfStock(engine, repos.parts.list(), repos.plans.list(), engineNames);
+  const parts: Part[] = stock.free;
   // The same order searchInput uses, so the search's indices name these parts.
   const coils = parts.filter((p) => p.kind === 'coil');
   const modules = parts.filter((p) => p.kind === 'module');
@@ -127,6 +131,7 @@ export async function searchShelf(
         .map(([id, count]) => ({ id, title: titles.get(id) ?? id, count: count ?? 0 }))
         .sort((a, b) => b.count - a.count),
       cautions: cautions(),
+      leftOut: stock.leftOut,
     };
   });
 }

@@ -120,6 +120,17 @@ export const shelfSuggestion = z.object({
   setup: shownSetup,
 });
 
+/** A part the search left out because plans marked as fitted on other engines use every one the shelf holds. */
+export const leftOutPart = z.object({
+  partId: id,
+  partName: z.string(),
+  kind: z.string(),
+  quantity: z.number().int().min(1),
+  fittedTo: z.array(z.object({ planId: id, planName: z.string(), engineId: id, engineName: z.string(), status: z.string() })),
+  /** The sentence the screen shows: "Your only one is fitted to “Plan” on Engine (marked wired)." */
+  reason: z.string(),
+});
+
 export const searchAnswer = z.object({
   engineId: id,
   engineName: z.string(),
@@ -130,6 +141,8 @@ export const searchAnswer = z.object({
   /** How many combinations each rule failed (one combination can count under several). */
   rejectedByRule: z.array(z.object({ id: z.string(), title: z.string(), count: z.number().int().min(0) })),
   cautions: z.array(shownCaution).min(1),
+  /** Parts not tried because every one of them is fitted elsewhere (shelf-stock.ts). */
+  leftOut: z.array(leftOutPart),
 });
 
 export const checkPlansRequest = z.object({
@@ -153,4 +166,5 @@ export type ShownSetup = z.infer<typeof shownSetup>;
 export type ComparisonAnswer = z.infer<typeof comparisonAnswer>;
 export type SearchAnswer = z.infer<typeof searchAnswer>;
 export type ShelfSuggestion = z.infer<typeof shelfSuggestion>;
+export type LeftOutPartShown = z.infer<typeof leftOutPart>;
 export type VerdictValue = z.infer<typeof verdictValue>;

@@ -15,6 +15,7 @@ import { gzipSync } from 'node:zlib';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { createBackup } from '../../db/backup.js';
 import { LOCK_FILE_NAME } from '../../db/lock.js';
+import { SCHEMA_VERSION } from '../../db/open.js';
 import { replaceWithNewestBackup } from '../../db/recover.js';
 import { describeStartupProblem } from '../../db/startup-problem.js';
 import { openBackend } from '../../electron/ipc/backend.js';
@@ -127,7 +128,7 @@ describe('files and folders that cannot be used', () => {
     const { dir, file } = withRawSql('newer', (db) => db.pragma('user_version = 99'));
     const before = sha(file);
     expect(sentenceFor(dir)).toBe(
-      `This workshop file was written by a newer version of the app (schema 99; this app knows up to 4). Update the app; the file was not changed. (${file})`,
+      `This workshop file was written by a newer version of the app (schema 99; this app knows up to ${SCHEMA_VERSION}). Update the app; the file was not changed. (${file})`,
     );
     expect(sha(file)).toBe(before);
   });

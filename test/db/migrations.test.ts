@@ -160,6 +160,9 @@ const perVersion: Record<number, (db: Database.Database) => void> = {
     migrate(old, migrations, 2);
     seedPlan(old);
     migrate(old, migrations, 3);
+    expect(old.prepare('SELECT coil_wiring FROM plans WHERE id = 1').get()).toEqual({ coil_wiring: 'as-marked-for-earth' });
+    // Today's repositories read a current file, so bring it up to date first.
+    migrate(old, migrations);
     const corrupt: unknown[] = [];
     const plan = createRepositories(old, { onCorruptRow: (r) => corrupt.push(r) }).plans.get(1);
     expect(corrupt).toEqual([]);
@@ -208,6 +211,34 @@ const perVersion: Record<number, (db: Database.Database) => void> = {
     // The deleted engine's and reading's ids are not handed out again.
     seedPlan(old);
     expect(old.prepare('SELECT id FROM engines').all()).toEqual([{ id: 2 }]);
+    old.close();
+  },
+  5: (db) => {
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'settings', 'sheet_ticks', 'sqlite_sequence']);
+    seedPlan(db);
+    // A part written without the column (as every earlier version wrote parts) is one on the shelf.
+    expect(db.prepare('SELECT quantity FROM parts WHERE id = 1').get()).toEqual({ quantity: 1 });
+    db.prepare('UPDATE parts SET quantity = 3 WHERE id = 1').run();
+    expect(() => db.prepare('UPDATE parts SET quantity = 0 WHERE id = 1').run()).toThrow(/CHECK/);
+    expect(() => db.prepare('UPDATE parts SET quantity = NULL WHERE id = 1').run()).toThrow(/NOT NULL/);
+    // STRICT: an integer column refuses text.
+    expect(() => db.prepare("UPDATE parts SET quantity = 'two' WHERE id = 1").run()).toThrow(/cannot store TEXT/);
+    // settings: one row a key, the value JSON.
+    db.prepare("INSERT INTO settings (key, value, updated_at) VALUES ('lengthUnit', '\"inch\"', ?)").run(NOW);
+    expect(() => db.prepare("INSERT INTO settings (key, value, updated_at) VALUES ('lengthUnit', '\"mm\"', ?)").run(NOW)).toThrow(/UNIQUE|PRIMARY KEY/);
+    expect(() => db.prepare("INSERT INTO settings (key, value, updated_at) VALUES ('lastScreen', 'not json', ?)").run(NOW)).toThrow(/CHECK/);
+
+    // A version-4 file keeps every row through the upgrade; its parts read back as one each.
+    const old = rawMemory();
+    migrate(old, migrations, 4);
+    seedPlan(old);
+    const before = (t: string) => old.prepare(`SELECT * FROM ${t} ORDER BY 1`).all() as Array<Record<string, unknown>>;
+    const kept = Object.fromEntries(['engines', 'plans', 'readings', 'sheet_ticks'].map((t) => [t, before(t)]));
+    const parts = before('parts');
+    migrate(old, migrations, 5);
+    for (const [t, rows] of Object.entries(kept)) expect(before(t), t).toEqual(rows);
+    expect(before('parts')).toEqual(parts.map((p) => ({ ...p, quantity: 1 })));
+    expect(before('settings')).toEqual([]);
     old.close();
   },
 };
@@ -280,13 +311,9 @@ describe('the runner', () => {
   it('rebuilds a table with foreign keys off, keeps every reference, and turns foreign keys back on', () => {
     const db = rawMemory();
     migrate(db, migrations, 1);
-    const repos = createRepositories(db);
-    const coil = repos.parts.create(coilIn);
-    const engine = repos.engines.create(engineIn({ coilId: coil.id }));
-    db.prepare(
-      `INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at)
-       VALUES (?, 'p', 'draft', ?, 0, 'switched-15', 0.8, ?, ?)`,
-    ).run(engine.id, coil.id, NOW, NOW);
+    // Raw SQL: today's repositories write columns a version-1 file does not have.
+    seedPlan(db);
+    const coil = { id: 1 };
     migrate(db, [...migrations.slice(0, 1), rebuildParts('1')]);
     expect(readUserVersion(db)).toBe(2);
     expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
@@ -298,16 +325,11 @@ describe('the runner', () => {
   it('rolls a rebuild back whole when it would orphan a plan’s part reference', () => {
     const db = rawMemory();
     migrate(db, migrations, 1);
-    const repos = createRepositories(db);
-    const coil = repos.parts.create(coilIn);
-    const engine = repos.engines.create(engineIn());
-    db.prepare(
-      `INSERT INTO plans (engine_id, name, status, coil_id, cranking_bypass, module_feed, plug_gap_mm, created_at, updated_at)
-       VALUES (?, 'p', 'draft', ?, 0, 'switched-15', 0.8, ?, ?)`,
-    ).run(engine.id, coil.id, NOW, NOW);
+    // Raw SQL: today's repositories write columns a version-1 file does not have.
+    seedPlan(db);
     expect(() => migrate(db, [...migrations.slice(0, 1), rebuildParts('0')])).toThrow(/broken reference/);
     expect(readUserVersion(db)).toBe(1);
-    expect(repos.parts.get(coil.id)).toMatchObject({ name: coilIn.name });
+    expect(db.prepare('SELECT name FROM parts WHERE id = 1').get()).toEqual({ name: 'c' });
     expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
     db.close();
   });
@@ -326,7 +348,7 @@ describe('opening a real file', () => {
     const file = join(temp('chain'), 'workshop.sqlite3');
     const db = openStore(file);
     expect(readUserVersion(db)).toBe(SCHEMA_VERSION);
-    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'sheet_ticks', 'sqlite_sequence']);
+    expect(tables(db)).toEqual(['advance_points', 'engines', 'meta', 'parts', 'plans', 'readings', 'settings', 'sheet_ticks', 'sqlite_sequence']);
     closeStore(db);
     expect(existsSync(file)).toBe(true);
   });

@@ -12,6 +12,7 @@ import { StoreError } from '../../db/errors.js';
 import { migrations } from '../../db/migrations/index.js';
 import { migrate } from '../../db/migrations/runner.js';
 import { SCHEMA_VERSION, closeStore, openStore } from '../../db/open.js';
+import { createEnginesRepository } from '../../db/repositories/engines.js';
 import { createRepositories, type Repositories } from '../../db/repositories/index.js';
 import { readingQuantities, readingUnits, type Plan, type ReadingInput } from '../../db/schema.js';
 import { coilIn, engineIn, planIn, readingIn, tempDir } from './samples.js';
@@ -209,9 +210,16 @@ describe('a version-1 file', () => {
     const raw = new Database(file);
     raw.pragma('foreign_keys = ON');
     migrate(raw, migrations, 1);
-    const oldRepos = createRepositories(raw);
-    const coil = oldRepos.parts.create(coilIn);
-    const engine = oldRepos.engines.create(engineIn({ coilId: coil.id }));
+    // The part in raw SQL too: today's parts repository writes `quantity` (version 5), which a version-1 file lacks.
+    const { kind: _k, name: coilName, notes: _n, ...coilData } = coilIn;
+    const coil = {
+      id: Number(
+        raw
+          .prepare("INSERT INTO parts (kind, name, notes, data, created_at, updated_at) VALUES ('coil', ?, '', ?, '2024-03-09T00:00:00Z', '2024-03-09T00:00:00Z')")
+          .run(coilName, JSON.stringify(coilData)).lastInsertRowid,
+      ),
+    };
+    const engine = createEnginesRepository({ db: raw, onCorruptRow: () => {} }).create(engineIn({ coilId: coil.id }));
     // The plan as version 1 wrote it (today's repository writes columns a version-1 file lacks).
     const p = {
       id: Number(
@@ -234,6 +242,7 @@ describe('a version-1 file', () => {
     expect(r[0]!.value).toBeCloseTo(1400 * 1e-3, 12);
     expect(r[1]!.value).toBeCloseTo(0.025 * 25.4, 12);
     expect(upgraded.pragma('user_version', { simple: true })).toBe(SCHEMA_VERSION);
+    expect(createRepositories(upgraded).parts.get(coil.id)).toMatchObject({ ...coilIn, quantity: 1 });
     closeStore(upgraded);
   });
 });

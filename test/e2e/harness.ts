@@ -164,10 +164,16 @@ export function e2eSuite(): { startHost(dataDir: string): Promise<Host>; startWo
   };
 }
 
-/** Loads the app from `host` and waits for the screen it opens on (the engines). */
+/**
+ * Loads the app from `host` and brings it to the engines. The app opens on the screen the person
+ * was last on (kept in the store's settings), so on a folder used before it may open elsewhere.
+ */
 export async function openApp(page: Page, host: Host): Promise<void> {
   await page.goto(host.url);
-  await page.getByRole('heading', { level: 1, name: 'Engines' }).waitFor();
+  const engines = page.getByRole('heading', { level: 1, name: 'Engines' });
+  await page.locator('main h1').first().waitFor();
+  if ((await engines.count()) === 0) await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: 'Engines' }).click();
+  await engines.waitFor();
 }
 
 /** Moves to a screen through the side list and waits for its heading. */

@@ -108,7 +108,8 @@ describe('the workshop file and the parts CSV through the bridge', () => {
     const { csv } = await ok(b, 'parts.csvExport', { kind: 'coil' });
     const lines = csv.trim().split('\n');
     const header = lines[0];
-    const text = [header, 'New coil A,,3,8,7500,80,,no,12,,', 'New coil B,,0,8,7500,80,,no,12,,'].join('\n');
+    // The last column is "how many" (store version 5), left blank: one each.
+    const text = [header, 'New coil A,,3,8,7500,80,,no,12,,,', 'New coil B,,0,8,7500,80,,no,12,,,'].join('\n');
     const r = await b.dispatch('parts.csvImport', { kind: 'coil', text });
     expect(r.ok).toBe(false);
     if (r.ok) return;

@@ -19,6 +19,7 @@ export type FieldSpec = {
 };
 
 export const fieldSpecs: Record<string, FieldSpec> = {
+  quantity: { label: 'How many you have', unit: '' },
   primaryResistanceOhm20C: { label: 'Primary resistance', unit: 'Ω' },
   primaryInductanceH: { label: 'Primary inductance', unit: 'mH', per: 1000 },
   secondaryResistanceOhm: { label: 'Secondary resistance', unit: 'Ω' },

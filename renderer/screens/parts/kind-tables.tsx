@@ -62,6 +62,9 @@ export function KindTable<K extends PartKind>({ kind, parts, unit, onEdit, onDel
               {c.head}
             </th>
           ))}
+          <th scope="col" className="num">
+            How many
+          </th>
           <ActionsHead />
         </tr>
       </thead>
@@ -79,6 +82,9 @@ export function KindTable<K extends PartKind>({ kind, parts, unit, onEdit, onDel
                 {c.cell(p as Of<K>, unit)}
               </td>
             ))}
+            <td className="num" data-testid={`part-quantity-${p.id}`}>
+              {p.quantity}
+            </td>
             <RowActions name={p.name} onEdit={() => onEdit(p)} onDelete={() => onDelete(p)} />
           </tr>
         ))}
