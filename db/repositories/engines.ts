@@ -31,6 +31,8 @@ export type EnginesRepository = {
    * STALE if the engine changed since the user saw it. Works on a row that no longer parses.
    */
   delete(id: number, opts: { deletePlansToo: boolean; expectedUpdatedAt: string }): { deleted: true; plansDeleted: number };
+  /** What a delete would take with the engine: its plans and their readings. NOT_FOUND if there is no such engine. */
+  contents(id: number): { plans: number; readings: number };
   count(): number;
 };
 
@@ -96,6 +98,7 @@ export function createEnginesRepository(ctx: RepoContext): EnginesRepository {
     insertPoint: db.prepare('INSERT INTO advance_points (engine_id, position, rpm, advance_deg) VALUES (?, ?, ?, ?)'),
     clearCurve: db.prepare('DELETE FROM advance_points WHERE engine_id = ?'),
     planCount: db.prepare<[number], { n: number }>('SELECT COUNT(*) AS n FROM plans WHERE engine_id = ?'),
+    readingCount: db.prepare<[number], { n: number }>('SELECT COUNT(*) AS n FROM readings WHERE plan_id IN (SELECT id FROM plans WHERE engine_id = ?)'),
     remove: db.prepare('DELETE FROM engines WHERE id = ?'),
     count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM engines'),
   };
@@ -196,6 +199,11 @@ export function createEnginesRepository(ctx: RepoContext): EnginesRepository {
         return read(id);
       }),
     delete: (id, opts) => writeTx(db, () => deleteTx(id, opts.deletePlansToo, opts.expectedUpdatedAt)),
+    contents: (id) =>
+      db.transaction(() => {
+        if (!s.version.get(id)) throw notFound(id);
+        return { plans: s.planCount.get(id)!.n, readings: s.readingCount.get(id)!.n };
+      })(),
     count: () => s.count.get()!.n,
   };
 }

@@ -8,18 +8,29 @@ import { createMetaRepository, type MetaRepository } from './meta.js';
 import { createPartsRepository, type PartsRepository } from './parts.js';
 import { createPlansRepository, type PlansRepository } from './plans.js';
 import { createReadingsRepository, type ReadingsRepository } from './readings.js';
+import { createRemovedBin, type RemovedKind, type RemovedSummary } from './removed.js';
+import { createSettingsRepository, type SettingsRepository } from './settings.js';
 import { writeTx, type CorruptRow, type RepoContext } from './shared.js';
 import { createTicksRepository, type TicksRepository } from './ticks.js';
 import { scanUnreadable, type UnreadableRow } from './unreadable.js';
 
+/** Each delete also answers `undoToken`, which `removed.restore` takes to put the record back. */
+type Undoable<R extends { delete: (...args: never[]) => object }> = Omit<R, 'delete'> & {
+  delete: (...args: Parameters<R['delete']>) => ReturnType<R['delete']> & { undoToken: number };
+};
+
 export type Repositories = {
-  engines: EnginesRepository;
-  parts: PartsRepository;
-  plans: PlansRepository;
-  readings: ReadingsRepository;
+  engines: Undoable<EnginesRepository>;
+  parts: Undoable<PartsRepository>;
+  plans: Undoable<PlansRepository>;
+  readings: Undoable<ReadingsRepository>;
+  /** What was deleted since the app started, to undo (kept in memory only). */
+  removed: { list(): RemovedSummary[]; restore(token: number): { kind: RemovedKind; id: number; label: string } };
   /** The ticked steps of each plan's wiring sheet. */
   ticks: TicksRepository;
   meta: MetaRepository;
+  /** The person's settings (mm/inch, the engine worked on, ticked plans, the last screen...). */
+  settings: SettingsRepository;
   /** Every engine, part, plan and reading that no longer parses (lists leave them out), with its label, version and reason. */
   unreadable(): UnreadableRow[];
   /** Run `fn` in one write transaction, begun IMMEDIATE (nested calls become savepoints); any throw rolls all of it back. */
@@ -40,13 +51,27 @@ export function createRepositories(db: Database.Database, options: RepositoryOpt
   const parts = createPartsRepository(ctx);
   const plans = createPlansRepository(ctx);
   const readings = createReadingsRepository(ctx);
+  const bin = createRemovedBin(db);
+  /** The delete, with a copy of what it removes taken in the same transaction and kept once it commits. */
+  const undoable = <A extends unknown[], T extends object>(kind: RemovedKind, del: (id: number, ...rest: A) => T) =>
+    (id: number, ...rest: A): T & { undoToken: number } => {
+      let copy: ReturnType<typeof bin.capture> = null;
+      const result = writeTx(db, () => {
+        copy = bin.capture(kind, id);
+        return del(id, ...rest);
+      });
+      // `del` throws NOT_FOUND when the row is missing, so a result means a copy was taken.
+      return { ...result, undoToken: copy ? bin.keep(copy) : 0 };
+    };
   return {
-    engines,
-    parts,
-    plans,
-    readings,
+    engines: { ...engines, delete: undoable('engine', engines.delete) },
+    parts: { ...parts, delete: undoable('part', parts.delete) },
+    plans: { ...plans, delete: undoable('plan', plans.delete) },
+    readings: { ...readings, delete: undoable('reading', readings.delete) },
+    removed: { list: () => bin.list(), restore: (token) => bin.restore(token) },
     ticks: createTicksRepository(ctx),
     meta: createMetaRepository(ctx),
+    settings: createSettingsRepository(ctx),
     unreadable: () =>
       db.transaction(() =>
         scanUnreadable(ctx, { engines: (id) => engines.get(id), parts: (id) => parts.get(id), plans: (id) => plans.get(id), readings: (id) => readings.get(id) }),
@@ -63,4 +88,6 @@ export type { PartsRepository } from './parts.js';
 export type { PlansRepository } from './plans.js';
 export type { ReadingsRepository } from './readings.js';
 export type { TicksRepository } from './ticks.js';
+export type { RemovedKind, RemovedSummary } from './removed.js';
 export type { MetaRepository } from './meta.js';
+export type { SettingsRepository } from './settings.js';

@@ -2,6 +2,7 @@
  * The parts bin: one table for every kind. `kind`, `name` and `notes` are columns; the fields that
  * differ by kind are JSON in `data`, re-parsed with the kind's zod schema on every read.
  */
+import type { z } from 'zod';
 import { part as partSchema, partInput, partKind, type Part, type PartInput, type PartKind } from '../schema.js';
 import { StoreError } from '../errors.js';
 import { checkVersion, INVALID_SENTENCE, nextStamp, nowIso, parseInput, parseJsonColumn, parseStored, plural, readAll, writeTx, type RepoContext } from './shared.js';
@@ -14,31 +15,34 @@ export type PartsRepository = {
   update(id: number, input: PartInput, expectedUpdatedAt: string): Part;
   /** Refused with IN_USE while a plan or an engine's existing setup refers to the part; STALE as update. Works on a row that no longer parses. */
   delete(id: number, expectedUpdatedAt: string): { deleted: true };
+  /** Who names the part (plans, engines' existing setups), in words; empty when it is free to delete. */
+  usedBy(id: number): string[];
   /** The first part of this kind with exactly this name (after trimming), or null. */
   findByName(kind: PartKind, name: string): Part | null;
   count(): number;
 };
 
-type PartRow = { id: number; kind: string; name: string; notes: string; data: string; updated_at: string };
+type PartRow = { id: number; kind: string; name: string; notes: string; data: string; quantity: number; updated_at: string };
 
 /** The parts of an engine's existing setup live in its JSON; these are the keys that name a part. */
 const EXISTING_PART_KEYS = ['coilPartId', 'ballastPartId', 'tachPartId', 'leadsPartId', 'plugPartId'] as const;
 
-function splitPart(p: PartInput): { kind: PartKind; name: string; notes: string; data: string } {
-  const { kind, name, notes, ...rest } = p;
-  return { kind, name, notes, data: JSON.stringify(rest) };
+/** `p` as parsed by `partInput` (so `quantity` is filled in); the kind's own fields go into `data`. */
+function splitPart(p: z.output<typeof partInput>): { kind: PartKind; name: string; notes: string; quantity: number; data: string } {
+  const { kind, name, notes, quantity, ...rest } = p;
+  return { kind, name, notes, quantity, data: JSON.stringify(rest) };
 }
 
 export function createPartsRepository(ctx: RepoContext): PartsRepository {
   const { db } = ctx;
-  const select = 'SELECT id, kind, name, notes, data, updated_at FROM parts';
+  const select = 'SELECT id, kind, name, notes, data, quantity, updated_at FROM parts';
   const s = {
     all: db.prepare<[], PartRow>(`${select} ORDER BY kind, name COLLATE NOCASE, id`),
     byKind: db.prepare<[string], PartRow>(`${select} WHERE kind = ? ORDER BY name COLLATE NOCASE, id`),
     get: db.prepare<[number], PartRow>(`${select} WHERE id = ?`),
     byName: db.prepare<[string, string], PartRow>(`${select} WHERE kind = ? AND name = ? ORDER BY id LIMIT 1`),
-    insert: db.prepare('INSERT INTO parts (kind, name, notes, data, created_at, updated_at) VALUES (@kind, @name, @notes, @data, @now, @now)'),
-    update: db.prepare('UPDATE parts SET kind = @kind, name = @name, notes = @notes, data = @data, updated_at = @now WHERE id = @id'),
+    insert: db.prepare('INSERT INTO parts (kind, name, notes, data, quantity, created_at, updated_at) VALUES (@kind, @name, @notes, @data, @quantity, @now, @now)'),
+    update: db.prepare('UPDATE parts SET kind = @kind, name = @name, notes = @notes, data = @data, quantity = @quantity, updated_at = @now WHERE id = @id'),
     remove: db.prepare('DELETE FROM parts WHERE id = ?'),
     count: db.prepare<[], { n: number }>('SELECT COUNT(*) AS n FROM parts'),
     plansUsing: db.prepare<{ id: number }, { id: number; name: string }>(
@@ -55,7 +59,7 @@ export function createPartsRepository(ctx: RepoContext): PartsRepository {
     const data = parseJsonColumn('parts', row.id, 'data', row.data);
     const spread = typeof data === 'object' && data !== null ? data : {};
     // Columns win over anything of the same name inside `data`.
-    return parseStored(partSchema, 'parts', row.id, { ...spread, kind: row.kind, name: row.name, notes: row.notes, id: row.id, updatedAt: row.updated_at });
+    return parseStored(partSchema, 'parts', row.id, { ...spread, kind: row.kind, name: row.name, notes: row.notes, quantity: row.quantity, id: row.id, updatedAt: row.updated_at });
   }
 
   function read(id: number): Part {
@@ -115,6 +119,7 @@ export function createPartsRepository(ctx: RepoContext): PartsRepository {
       }),
     update: (id, input, expectedUpdatedAt) => writeTx(db, () => updateTx(id, input, expectedUpdatedAt)),
     delete: (id, expectedUpdatedAt) => writeTx(db, () => deleteTx(id, expectedUpdatedAt)),
+    usedBy: (id) => db.transaction(() => users(id))(),
     findByName: (kind, name) => {
       const row = s.byName.get(kind, name.trim());
       return row ? fromRow(row) : null;

@@ -145,7 +145,11 @@ interface Remedy {
   energyAtRedline: number;
 }
 
-export function searchBest(input: SearchInput): SearchResult {
+/**
+ * `onProgress` (optional) is told how many of the module-and-coil pairs have been tried, after each
+ * pair; it changes nothing in the answer.
+ */
+export function searchBest(input: SearchInput, onProgress?: (done: number, total: number) => void): SearchResult {
   const s = createSession(input.engine, input.conditions, input.options);
   const ex = analyse(s, input.existing, null, false);
   const base = baselineOf(ex, 'the existing setup');
@@ -198,6 +202,7 @@ export function searchBest(input: SearchInput): SearchResult {
         record(ci, mi, bi, false, judge(s, plain, keyOn, base, ws, failed));
         record(ci, mi, bi, true, judge(s, twin, keyOn, base, ws, failed, { crankingOnly: true }));
       }
+      onProgress?.(mi * input.coils.length + ci + 1, input.modules.length * input.coils.length);
     }
   }
   scored.sort(better);

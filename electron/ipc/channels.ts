@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { engine, engineInput, part, partInput, partKind, plan, planInput, planUpdateInput, planStatus, reading, readingInput, stepKey } from '../../db/schema.js';
+import { settings, settingsPatch } from '../../db/schema.js';
 import { checkPlansRequest, checkSearchRequest, comparisonAnswer, searchAnswer } from './check-shapes.js';
 import { printAnswer, printRequest, sheetAnswerFields } from './sheet-shapes.js';
 import { recordsChannels } from './records-shapes.js';
@@ -22,6 +23,19 @@ const byId = z.object({ id });
  */
 const expectedUpdatedAt = z.string({ error: 'Send the updatedAt of the record as it was shown.' }).min(1, 'Send the updatedAt of the record as it was shown.');
 const byIdAt = z.object({ id, expectedUpdatedAt });
+/** Names one delete for 'removed.restore' (the undo). */
+const undoToken = z.number().int().positive();
+const removedKind = z.enum(['engine', 'part', 'plan', 'reading']);
+export const removedSummary = z.object({
+  token: undoToken,
+  kind: removedKind,
+  id,
+  label: z.string(),
+  removedAt: z.string(),
+  plans: z.number().int().min(0),
+  readings: z.number().int().min(0),
+});
+export type RemovedSummary = z.infer<typeof removedSummary>;
 
 export const engineSummary = z.object({
   id,
@@ -55,22 +69,32 @@ export const channels = {
   /** Refused with IN_USE while plans use the engine, unless the user has confirmed the cascade. */
   'engines.delete': {
     request: z.object({ id, expectedUpdatedAt, deletePlansToo: z.boolean() }),
-    response: z.object({ deleted: z.literal(true), plansDeleted: z.number().int() }),
+    response: z.object({ deleted: z.literal(true), plansDeleted: z.number().int(), undoToken }),
   },
   'parts.list': { request: z.object({ kind: partKind.optional() }), response: z.array(part) },
   'parts.get': { request: byId, response: part },
   'parts.create': { request: z.object({ part: partInput }), response: part },
   'parts.update': { request: z.object({ id, expectedUpdatedAt, part: partInput }), response: part },
-  'parts.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true) }) },
+  'parts.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), undoToken }) },
   'plans.list': { request: z.object({ engineId: id.optional() }), response: z.array(plan) },
   'plans.get': { request: byId, response: plan },
   'plans.create': { request: z.object({ plan: planInput }), response: plan },
   /** The status may be left out: then the stored one stays (it moves by 'plans.setStatus' and the work). */
   'plans.update': { request: z.object({ id, expectedUpdatedAt, plan: planUpdateInput }), response: plan },
-  'plans.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), readingsDeleted: z.number().int() }) },
+  'plans.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), readingsDeleted: z.number().int(), undoToken }) },
   'readings.list': { request: z.object({ planId: id }), response: z.array(reading) },
   'readings.add': { request: z.object({ reading: readingInput }), response: reading },
-  'readings.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true) }) },
+  'readings.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), undoToken }) },
+  /** What deleting would take or meet, asked before the one question: an engine's plans and readings, a part's users. */
+  'engines.contents': { request: z.strictObject({ id }), response: z.object({ plans: z.number().int().min(0), readings: z.number().int().min(0) }) },
+  'parts.usedBy': { request: z.strictObject({ id }), response: z.object({ usedBy: z.array(z.string()) }) },
+  /** What was deleted since the app started, newest first (kept in memory until the app is closed). */
+  'removed.list': { request: z.strictObject({}), response: z.object({ removed: z.array(removedSummary) }) },
+  /** Puts a removed record back with its id (and everything that went with it). */
+  'removed.restore': {
+    request: z.strictObject({ token: undoToken }),
+    response: z.object({ kind: removedKind, id, label: z.string() }),
+  },
   /** A reading corrected: converted to its quantity's unit like 'readings.add'; it stays with its plan. */
   'readings.update': { request: z.strictObject({ id, expectedUpdatedAt, reading: readingInput }), response: reading },
   /** The status set by hand, in any direction (the work on the sheet only ever moves it forward). */
@@ -91,14 +115,21 @@ export const channels = {
   'sheet.tick': { request: z.strictObject({ planId: id, stepKey, ticked: z.boolean() }), response: sheetAnswer },
   /** Prints the page shown (desktop: saved as a PDF); the browser host answers UNSUPPORTED and the page uses window.print(). */
   'app.print': { request: printRequest, response: printAnswer },
+  /** Every setting (defaults where none is stored): mm/inch, the engine worked on, ticked plans per engine, the first-run guide, the last screen. */
+  'settings.get': { request: z.strictObject({}), response: settings },
+  /** Writes the keys given (all or none; an unknown key or a bad value is refused naming the key) and answers every setting. */
+  'settings.set': { request: settingsPatch, response: settings },
   /** The engine's existing setup beside up to three of its plans, judged rule by rule. */
   'check.plans': { request: checkPlansRequest, response: comparisonAnswer },
   /** The best combinations of module, coil and ballast from the whole parts bin for one engine (in a worker thread). */
   'check.search': { request: checkSearchRequest, response: searchAnswer },
   /** Stops every running search; each answers CANCELLED. */
   'check.cancel': { request: z.strictObject({}), response: z.object({ cancelled: z.number().int().min(0) }) },
-  /** How many searches are running and for how long the oldest has run (ms). */
-  'check.progress': { request: z.strictObject({}), response: z.object({ running: z.number().int().min(0), elapsedMs: z.number().min(0) }) },
+  /** How many searches are running, for how long the oldest has run (ms), and the share of its combinations tried. */
+  'check.progress': {
+    request: z.strictObject({}),
+    response: z.object({ running: z.number().int().min(0), elapsedMs: z.number().min(0), share: z.number().min(0).max(1) }),
+  },
   /** Backups, the workshop file and the parts lists as CSV (records-shapes.ts). */
   ...recordsChannels,
 } as const;

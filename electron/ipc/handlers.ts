@@ -74,10 +74,14 @@ export function handlersFor(repos: Repositories, info: HostInfo): Handlers {
       return saved;
     }),
     'readings.delete': guard(undefined, (r) => {
-      const { planId } = repos.readings.delete(r.id, r.expectedUpdatedAt);
+      const { planId, undoToken } = repos.readings.delete(r.id, r.expectedUpdatedAt);
       advanceAfterReading(repos, planId);
-      return { deleted: true as const };
+      return { deleted: true as const, undoToken };
     }),
+    'engines.contents': guard(undefined, (r) => repos.engines.contents(r.id)),
+    'parts.usedBy': guard(undefined, (r) => ({ usedBy: repos.parts.usedBy(r.id) })),
+    'removed.list': guard(undefined, () => ({ removed: repos.removed.list() })),
+    'removed.restore': guard(undefined, (r) => repos.removed.restore(r.token)),
 
     // Weighing a plan moves it from draft to checked.
     'check.plans': guard(undefined, (r) => {
@@ -88,6 +92,9 @@ export function handlersFor(repos: Repositories, info: HostInfo): Handlers {
     'check.search': guardAsync(undefined, (r) => searchShelf(repos, r, searches.run)),
     'check.cancel': () => ({ cancelled: searches.cancelAll() }),
     'check.progress': () => searches.progress(),
+
+    'settings.get': guard(undefined, () => repos.settings.get()),
+    'settings.set': guard(undefined, (r) => repos.settings.set(r)),
 
     'sheet.get': guard(undefined, (r) => getSheet(repos, r.planId)),
     'sheet.tick': guard(undefined, (r) => tickStep(repos, r)),

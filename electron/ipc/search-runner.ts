@@ -1,6 +1,6 @@
 /**
  * Runs parts-bin searches in worker threads (search-worker.ts), one worker per search, and lets the
- * screen ask how long the running ones have taken and stop them. A stopped search answers
+ * screen ask how long the running ones have taken, how far the oldest has got, and stop them. A stopped search answers
  * CANCELLED; nothing is written either way (a search only reads). Workers are unref'd, so a search
  * left running never keeps the process from exiting.
  */
@@ -14,8 +14,8 @@ export type SearchJobs = {
   run(input: SearchInput): Promise<SearchResult>;
   /** Stops every running search; answers how many were stopped. */
   cancelAll(): number;
-  /** How many searches run, and for how long the oldest has run. */
-  progress(): { running: number; elapsedMs: number };
+  /** How many searches run, for how long the oldest has run, and the share of its combinations tried (0 to 1). */
+  progress(): { running: number; elapsedMs: number; share: number };
 };
 
 /**
@@ -28,7 +28,7 @@ function workerUrl(): URL {
 }
 
 export function createSearchJobs(): SearchJobs {
-  const running = new Map<Worker, { startedAt: number; cancel: () => void }>();
+  const running = new Map<Worker, { startedAt: number; share: number; cancel: () => void }>();
   return {
     run: (input) =>
       new Promise<SearchResult>((resolve, reject) => {
@@ -42,10 +42,15 @@ export function createSearchJobs(): SearchJobs {
           void worker.terminate();
           fn();
         };
-        running.set(worker, { startedAt: Date.now(), cancel: () => finish(() => reject(new AppFailure('CANCELLED', CANCELLED_SENTENCE))) });
-        worker.on('message', (m: { ok: true; result: SearchResult } | { ok: false; name: string; message: string }) =>
-          finish(() => (m.ok ? resolve(m.result) : reject(m.name === 'CheckerInputError' ? new CheckerInputError(m.message) : new Error(m.message)))),
-        );
+        const job = { startedAt: Date.now(), share: 0, cancel: () => finish(() => reject(new AppFailure('CANCELLED', CANCELLED_SENTENCE))) };
+        running.set(worker, job);
+        worker.on('message', (m: { progress: { done: number; total: number } } | { ok: true; result: SearchResult } | { ok: false; name: string; message: string }) => {
+          if ('progress' in m) {
+            job.share = m.progress.total > 0 ? m.progress.done / m.progress.total : 0;
+            return;
+          }
+          finish(() => (m.ok ? resolve(m.result) : reject(m.name === 'CheckerInputError' ? new CheckerInputError(m.message) : new Error(m.message))));
+        });
         worker.on('error', (err) => finish(() => reject(err)));
         worker.on('exit', (code) => finish(() => reject(new Error(`The search stopped unexpectedly (worker exit ${code}).`))));
         worker.postMessage(input);
@@ -56,8 +61,10 @@ export function createSearchJobs(): SearchJobs {
       return all.length;
     },
     progress: () => {
-      const starts = [...running.values()].map((j) => j.startedAt);
-      return { running: starts.length, elapsedMs: starts.length ? Date.now() - Math.min(...starts) : 0 };
+      const jobs = [...running.values()];
+      if (jobs.length === 0) return { running: 0, elapsedMs: 0, share: 0 };
+      const oldest = jobs.reduce((a, b) => (b.startedAt < a.startedAt ? b : a));
+      return { running: jobs.length, elapsedMs: Date.now() - oldest.startedAt, share: oldest.share };
     },
   };
 }

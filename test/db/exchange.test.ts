@@ -148,6 +148,23 @@ describe('workshop file round trip', () => {
     );
     expect(tried).toBe(40);
   });
+
+  it('a reading note that migration 002 lengthened (over 500 characters) goes out and comes back whole', () => {
+    const source = freshStore('exchange-long-src');
+    const target = freshStore('exchange-long-dst');
+    const repos = createRepositories(source);
+    const engine = repos.engines.create(engineIn());
+    const plan = repos.plans.create(planIn(engine.id));
+    // A 500-character note (the most a form took before) with the migration's sentence in front.
+    const note = `(Recorded as coil-primary-resistance in "furlong", which could not be converted to ohm.) ${'n'.repeat(500)}`;
+    expect(note.length).toBeGreaterThan(500);
+    source
+      .prepare("INSERT INTO readings (plan_id, quantity, value, unit, taken_on, note, created_at, updated_at) VALUES (?, 'other', 3, 'furlong', '2024-05-01', ?, '2024-05-01T00:00:00.000Z', '2024-05-01T00:00:00.000Z')")
+      .run(plan.id, note);
+    const file = JSON.parse(JSON.stringify(exportWorkshop(source).workshop)) as ExportedWorkshop;
+    workshopImport(target, file);
+    expect((target.prepare('SELECT note FROM readings').all() as Array<{ note: string }>).map((r) => r.note)).toEqual([note]);
+  });
 });
 
 describe('importing into a workshop that already holds records', () => {

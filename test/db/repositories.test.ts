@@ -57,14 +57,15 @@ describe.each(['memory', 'file'] as const)('repositories on %s', (where) => {
 
   it.each(everyKind.map((p) => [p.kind, p] as const))('creates, reads, updates and deletes a %s part', (_kind, input) => {
     const created = s.repos.parts.create(input);
-    expect(created).toEqual({ ...input, id: created.id, updatedAt: created.updatedAt });
+    // A part sent without `quantity` is one on the shelf (store version 5).
+    expect(created).toEqual({ ...input, quantity: 1, id: created.id, updatedAt: created.updatedAt });
     expect(s.repos.parts.get(created.id)).toEqual(created);
     expect(s.repos.parts.list(input.kind).map((p) => p.id)).toEqual([created.id]);
 
     const renamed = s.repos.parts.update(created.id, { ...input, name: 'Renamed', notes: 'changed' }, created.updatedAt);
-    expect(renamed).toEqual({ ...input, name: 'Renamed', notes: 'changed', id: created.id, updatedAt: renamed.updatedAt });
+    expect(renamed).toEqual({ ...input, quantity: 1, name: 'Renamed', notes: 'changed', id: created.id, updatedAt: renamed.updatedAt });
     expect(renamed.updatedAt > created.updatedAt).toBe(true);
-    expect(s.repos.parts.delete(created.id, renamed.updatedAt)).toEqual({ deleted: true });
+    expect(s.repos.parts.delete(created.id, renamed.updatedAt)).toEqual({ deleted: true, undoToken: expect.any(Number) });
     expect(storeError(() => s.repos.parts.get(created.id)).code).toBe('NOT_FOUND');
   });
 
@@ -90,7 +91,7 @@ describe.each(['memory', 'file'] as const)('repositories on %s', (where) => {
     expect(saved).toEqual({ ...shorter, id: created.id, updatedAt: saved.updatedAt });
     expect(counts(s.db).advance_points).toBe(2);
 
-    expect(s.repos.engines.delete(created.id, { deletePlansToo: false, expectedUpdatedAt: saved.updatedAt })).toEqual({ deleted: true, plansDeleted: 0 });
+    expect(s.repos.engines.delete(created.id, { deletePlansToo: false, expectedUpdatedAt: saved.updatedAt })).toEqual({ deleted: true, undoToken: expect.any(Number), plansDeleted: 0 });
     expect(counts(s.db)).toMatchObject({ engines: 0, advance_points: 0 });
   });
 
@@ -112,10 +113,10 @@ describe.each(['memory', 'file'] as const)('repositories on %s', (where) => {
     const r1 = s.repos.readings.add(readingIn(created.id, 3.1));
     const r2 = s.repos.readings.add({ ...readingIn(created.id, 12.6), quantity: 'battery-voltage-resting', unit: 'V' });
     expect(s.repos.readings.list(created.id)).toEqual([r1, r2]);
-    expect(s.repos.readings.delete(r1.id, r1.updatedAt)).toEqual({ deleted: true, planId: created.id });
+    expect(s.repos.readings.delete(r1.id, r1.updatedAt)).toEqual({ deleted: true, undoToken: expect.any(Number), planId: created.id });
     expect(s.repos.readings.list(created.id)).toEqual([r2]);
 
-    expect(s.repos.plans.delete(created.id, updated.updatedAt)).toEqual({ deleted: true, readingsDeleted: 1 });
+    expect(s.repos.plans.delete(created.id, updated.updatedAt)).toEqual({ deleted: true, undoToken: expect.any(Number), readingsDeleted: 1 });
     expect(counts(s.db)).toMatchObject({ plans: 0, readings: 0 });
   });
 
@@ -163,7 +164,7 @@ describe('references, refusals and cascades', () => {
     s.repos.readings.add(readingIn(p1.id));
     s.repos.readings.add(readingIn(p2.id));
     s.repos.readings.add(readingIn(kept.id));
-    expect(s.repos.engines.delete(engine.id, { deletePlansToo: true, expectedUpdatedAt: engine.updatedAt })).toEqual({ deleted: true, plansDeleted: 2 });
+    expect(s.repos.engines.delete(engine.id, { deletePlansToo: true, expectedUpdatedAt: engine.updatedAt })).toEqual({ deleted: true, undoToken: expect.any(Number), plansDeleted: 2 });
     expect(counts(s.db)).toMatchObject({ engines: 1, plans: 1, readings: 1 });
     expect(s.repos.plans.list()).toEqual([kept]);
   });
@@ -210,7 +211,7 @@ describe('references, refusals and cascades', () => {
     expect(storeError(() => s.repos.parts.update(coil.id, { ...plugIn }, coil.updatedAt)).fields).toHaveProperty('kind');
     s.repos.engines.update(engine.id, engineIn(), engine.updatedAt);
     const plug = s.repos.parts.update(coil.id, plugIn, coil.updatedAt);
-    expect(plug).toEqual({ ...plugIn, id: coil.id, updatedAt: plug.updatedAt });
+    expect(plug).toEqual({ ...plugIn, quantity: 1, id: coil.id, updatedAt: plug.updatedAt });
   });
 
   it('validates input at the store boundary even if the bridge was skipped', () => {
@@ -267,7 +268,7 @@ describe('rows that no longer match the schema', () => {
     expect(err.message).toMatch(/id \d+ in the engines table could not be read \(existing\.plugGapMm/);
     // The list reads only plain columns, so the engine still shows and can be opened to repair or delete.
     expect(s.repos.engines.list().map((e) => e.id)).toEqual([engine.id]);
-    expect(s.repos.engines.delete(engine.id, { deletePlansToo: false, expectedUpdatedAt: engine.updatedAt })).toEqual({ deleted: true, plansDeleted: 0 });
+    expect(s.repos.engines.delete(engine.id, { deletePlansToo: false, expectedUpdatedAt: engine.updatedAt })).toEqual({ deleted: true, undoToken: expect.any(Number), plansDeleted: 0 });
   });
 });
 

@@ -99,7 +99,7 @@ describe('the parts screen', () => {
     const plug = stored.find((p) => p.kind === 'plug')!;
     await page.getByRole('radio', { name: 'inch' }).check();
     const gapCell = await page.getByTestId(`part-row-${plug.id}`).locator('td').nth(1).innerText();
-    expect(gapCell).toBe(`${Number(((plug.gapMinMm as number) / 25.4).toFixed(4))} to ${Number(((plug.gapMaxMm as number) / 25.4).toFixed(4))} in`);
+    expect(gapCell).toBe(`${((plug.gapMinMm as number) / 25.4).toFixed(3)} to ${((plug.gapMaxMm as number) / 25.4).toFixed(3)} in`);
     await screenshot(page, 'parts-list-plugs-inch');
     await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: 'Engines' }).click();
     await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: 'Parts on the shelf' }).click();
@@ -264,10 +264,12 @@ describe('the parts screen', () => {
     expect(used, 'the demo workshop should hold a coil that a plan uses').toBeDefined();
     const target = used!;
 
+    // One dialog, saying who uses it first: no "Delete?" question that ends in a refusal.
     await page.getByRole('button', { name: `Delete ${target.name}` }).click();
-    await page.getByRole('dialog', { name: `Delete ${target.name}?` }).getByRole('button', { name: 'Delete the part' }).click();
-    const refused = page.getByRole('dialog', { name: `${target.name} is still in use` });
+    const refused = page.getByRole('dialog', { name: `${target.name} is in use` });
     await refused.waitFor();
+    expect(await refused.getByRole('button', { name: 'Delete the part' }).count()).toBe(0);
+    expect(await page.getByRole('dialog', { name: `Delete ${target.name}?` }).count()).toBe(0);
     const sentence = await refused.getByTestId('delete-part-refusal').innerText();
     for (const who of users.get(target.id)!) expect(sentence).toContain(who);
     expect(await refused.innerText()).toContain('Nothing was deleted');
@@ -316,9 +318,14 @@ describe('the parts screen', () => {
 
     await page.getByRole('button', { name: `Delete ${target.name}` }).click();
     await dialog.getByRole('button', { name: 'Delete the part' }).click();
-    await page.getByTestId('parts-done').getByText(`${target.name} was deleted.`).waitFor();
+    const note = page.getByTestId('removal-notice');
+    await note.getByText(`${target.name} was taken off the shelf.`).waitFor();
     expect(await page.getByTestId(`part-row-${target.id}`).count()).toBe(0);
     expect((await api<StoredPart[]>(host, 'parts.list', {})).some((p) => p.id === target.id)).toBe(false);
+    // Undo puts it back on the shelf as it was.
+    await note.getByRole('button', { name: 'Undo' }).click();
+    await page.getByTestId(`part-row-${target.id}`).waitFor();
+    expect((await api<StoredPart[]>(host, 'parts.list', {})).find((p) => p.id === target.id)).toEqual(target);
   });
 
   it('warns before leaving unsaved edits, and deletes from the editor after asking', async () => {
@@ -328,8 +335,8 @@ describe('the parts screen', () => {
     await page.getByRole('heading', { level: 1, name: `Spark plug: ${plug.name}` }).waitFor();
     // Switching mm/inch alone is not an edit; the gap is re-shown in inches (25.4 mm to the inch).
     await page.getByRole('radio', { name: 'inch' }).check();
-    expect(Number(await page.getByLabel('Smallest gap (in)').inputValue())).toBeCloseTo((plug.gapMinMm as number) / 25.4, 4);
-    expect(Number(await page.getByLabel('Largest gap (in)').inputValue())).toBeCloseTo((plug.gapMaxMm as number) / 25.4, 4);
+    expect(await page.getByLabel('Smallest gap (in)').inputValue()).toBe(((plug.gapMinMm as number) / 25.4).toFixed(3));
+    expect(await page.getByLabel('Largest gap (in)').inputValue()).toBe(((plug.gapMaxMm as number) / 25.4).toFixed(3));
     expect(await page.getByTestId('unsaved').count()).toBe(0);
     await screenshot(page, 'part-editor-plug-inch');
     await page.getByRole('button', { name: 'Back to the parts' }).click();
@@ -353,7 +360,7 @@ describe('the parts screen', () => {
     await page.getByRole('button', { name: 'Delete this part' }).click();
     await page.getByRole('dialog', { name: `Delete ${target.name}?` }).getByRole('button', { name: 'Delete the part' }).click();
     await page.getByRole('heading', { level: 1, name: 'Parts on the shelf' }).waitFor();
-    await page.getByTestId('flash').getByText(`${target.name} was deleted.`).waitFor();
+    await page.getByTestId('removal-notice').getByText(`${target.name} was taken off the shelf.`).waitFor();
     expect((await api<StoredPart[]>(host, 'parts.list', {})).some((p) => p.id === target.id)).toBe(false);
   });
 });

@@ -43,6 +43,12 @@ const malformed: Record<ChannelName, { payload: unknown; field: string }> = {
   'readings.update': { payload: { id: 1, expectedUpdatedAt: '2024-01-01T00:00:00.000Z', reading: { ...readingIn(1), unit: 'furlong' } }, field: 'reading.unit' },
   'plans.setStatus': { payload: { id: 1, status: 'finished' }, field: 'status' },
   'store.unreadable': { payload: { all: true }, field: '_' },
+  'settings.get': { payload: { lengthUnit: 'mm' }, field: '_' },
+  'settings.set': { payload: { lengthUnit: 'cm' }, field: 'lengthUnit' },
+  'engines.contents': { payload: { id: 2, plans: true }, field: '_' },
+  'parts.usedBy': { payload: { id: 'seven' }, field: 'id' },
+  'removed.list': { payload: { kind: 'engine' }, field: '_' },
+  'removed.restore': { payload: { token: 0 }, field: 'token' },
   'check.cancel': { payload: { now: 1 }, field: '_' },
   'check.progress': { payload: [], field: '_' },
   'sheet.get': { payload: { planId: 1, colour: 'red' }, field: '_' },
@@ -118,7 +124,7 @@ describe('happy paths', () => {
     const refused = await call('engines.delete', { id: withPlans.id, deletePlansToo: false, expectedUpdatedAt: withPlans.updatedAt });
     expect(refused).toMatchObject({ ok: false, error: { code: 'IN_USE' } });
     const before = counts();
-    expect(await ok('engines.delete', { id: withPlans.id, deletePlansToo: true, expectedUpdatedAt: withPlans.updatedAt })).toEqual({ deleted: true, plansDeleted: withPlans.planCount });
+    expect(await ok('engines.delete', { id: withPlans.id, deletePlansToo: true, expectedUpdatedAt: withPlans.updatedAt })).toEqual({ deleted: true, undoToken: expect.any(Number), plansDeleted: withPlans.planCount });
     expect(counts().plans).toBe(before.plans! - withPlans.planCount);
   });
 

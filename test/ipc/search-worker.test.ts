@@ -53,7 +53,7 @@ describe('the search in a worker thread', () => {
     expect((await ok('check.progress', {})).running).toBe(1);
     expect(await ok('check.cancel', {})).toEqual({ cancelled: 1 });
     expect(await search).toEqual({ ok: false, error: { code: 'CANCELLED', message: 'The search was stopped before it finished; nothing was changed.' } });
-    expect(await ok('check.progress', {})).toEqual({ running: 0, elapsedMs: 0 });
+    expect(await ok('check.progress', {})).toEqual({ running: 0, elapsedMs: 0, share: 0 });
     expect(store.counts()).toEqual(before);
   }, 60_000);
 });

@@ -52,10 +52,10 @@ describe('rows that no longer parse', () => {
 
     // Each is deleted with the version 'store.unreadable' gave, though it does not parse.
     const at = (table: string) => rows.find((r: { table: string }) => r.table === table);
-    expect(await ok('parts.delete', { id: freePart.id, expectedUpdatedAt: at('parts').updatedAt })).toEqual({ deleted: true });
-    expect(await ok('engines.delete', { id: lonely.id, expectedUpdatedAt: at('engines').updatedAt, deletePlansToo: false })).toEqual({ deleted: true, plansDeleted: 0 });
-    expect(await ok('plans.delete', { id: withPlan.id, expectedUpdatedAt: at('plans').updatedAt })).toEqual({ deleted: true, readingsDeleted: readingsOf.length });
-    expect(await ok('readings.delete', { id: reading.id, expectedUpdatedAt: at('readings').updatedAt })).toEqual({ deleted: true });
+    expect(await ok('parts.delete', { id: freePart.id, expectedUpdatedAt: at('parts').updatedAt })).toEqual({ deleted: true, undoToken: expect.any(Number) });
+    expect(await ok('engines.delete', { id: lonely.id, expectedUpdatedAt: at('engines').updatedAt, deletePlansToo: false })).toEqual({ deleted: true, undoToken: expect.any(Number), plansDeleted: 0 });
+    expect(await ok('plans.delete', { id: withPlan.id, expectedUpdatedAt: at('plans').updatedAt })).toEqual({ deleted: true, undoToken: expect.any(Number), readingsDeleted: readingsOf.length });
+    expect(await ok('readings.delete', { id: reading.id, expectedUpdatedAt: at('readings').updatedAt })).toEqual({ deleted: true, undoToken: expect.any(Number) });
     expect(await ok('store.unreadable', {})).toEqual({ rows: [] });
   });
 

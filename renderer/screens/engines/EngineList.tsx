@@ -4,17 +4,17 @@ import { ActionsHead, ListNotices, RowActions, useListScreen } from '../../app/l
 import type { Navigate } from '../../app/routes.js';
 import { useDeleteEngine } from './delete-engine.js';
 import { earthWords } from './labels.js';
+import { FirstSteps } from './FirstSteps.js';
 
 export function EngineList({ navigate, version, onDeleted }: { navigate: Navigate; version: number; onDeleted: (id: number) => void }): ReactNode {
   const { items: engines, setItems: setEngines, problem, setProblem, done, setDone, reload } = useListScreen('engines.list', {}, version);
 
   const del = useDeleteEngine(
-    (id, plansDeleted) => {
+    (id) => {
       onDeleted(id);
       // Take the row away at once; the reload below then brings the plan counts up to date.
+      // The note with its Undo comes from the delete itself (see delete-engine.tsx).
       setEngines((list) => list?.filter((e) => e.id !== id) ?? list);
-      const name = engines?.find((e) => e.id === id)?.name ?? 'The engine';
-      setDone(plansDeleted > 0 ? `${name} was deleted, with ${plansDeleted === 1 ? 'its plan' : `its ${plansDeleted} plans`}.` : `${name} was deleted.`);
       reload();
     },
     (message, code) => {
@@ -35,6 +35,7 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
         </button>
       </div>
       <ListNotices problem={problem} done={done} onDismissProblem={() => setProblem(null)} onDismissDone={() => setDone(null)} />
+      <FirstSteps engines={engines} navigate={navigate} />
       {engines === null && !problem ? <p className="quiet">Reading the workshop…</p> : null}
       {engines && engines.length === 0 ? (
         <p className="empty">No engines yet. Add one, or load the demo workshop to look around first.</p>

@@ -21,8 +21,8 @@ export function PartsList({ navigate, version }: Props): ReactNode {
 
   const del = useDeletePart(
     (target) => {
+      // The note with its Undo comes from the delete itself (see delete-part.tsx).
       setParts((list) => list?.filter((p) => p.id !== target.id) ?? list);
-      setDone(`${target.name} was deleted.`);
       reload();
     },
     reload,

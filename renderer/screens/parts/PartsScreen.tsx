@@ -10,12 +10,11 @@ type Props = {
   leave: Navigate;
   /** Bumped when the demo loader adds parts, so the list reads the shelf again. */
   version: number;
-  onDeleted: (name: string) => void;
 };
 
-export function PartsScreen({ route, navigate, leave, version, onDeleted }: Props): ReactNode {
+export function PartsScreen({ route, navigate, leave, version }: Props): ReactNode {
   const target = route.part;
   if (!target) return <PartsList navigate={navigate} version={version} />;
   const key = 'id' in target ? `p${target.id}` : `new-${target.newKind}`;
-  return <PartEditor key={key} target={target} navigate={navigate} leave={leave} onDeleted={onDeleted} />;
+  return <PartEditor key={key} target={target} navigate={navigate} leave={leave} />;
 }

@@ -11,6 +11,7 @@ type Props = {
   ticked: readonly number[];
   onTick: (id: number, on: boolean) => void;
   onEdit: (plan: Plan) => void;
+  onDelete: (plan: Plan) => void;
   onNew: () => void;
   onOpenSheet: (plan: Plan) => void;
   editingId: number | null | 'new';
@@ -18,7 +19,7 @@ type Props = {
 
 const partName = (parts: readonly Part[], id: number | null, none: string): string => (id === null ? none : (parts.find((p) => p.id === id)?.name ?? `part no. ${id}`));
 
-export function PlanList({ plans, parts, ticked, onTick, onEdit, onNew, onOpenSheet, editingId }: Props): ReactNode {
+export function PlanList({ plans, parts, ticked, onTick, onEdit, onDelete, onNew, onOpenSheet, editingId }: Props): ReactNode {
   const full = ticked.length >= MAX_TICKED;
   return (
     <section className="panel plans-panel" aria-labelledby="plans-title">
@@ -57,6 +58,9 @@ export function PlanList({ plans, parts, ticked, onTick, onEdit, onNew, onOpenSh
                   </button>
                   <button type="button" className="small" onClick={() => onEdit(p)} disabled={editingId === p.id} aria-label={`Change the plan ${p.name}`}>
                     Change
+                  </button>
+                  <button type="button" className="small danger" onClick={() => onDelete(p)} aria-label={`Delete the plan ${p.name}`}>
+                    Delete
                   </button>
                 </li>
               );

@@ -5,6 +5,7 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { call } from '../../app/bridge.js';
 import type { SearchAnswer, ShelfSuggestion } from '../../../electron/ipc/channels.js';
+import { kindWords } from '../parts/labels.js';
 import { VerdictBadge } from './Verdict.js';
 import { number, ratioText, rpmText, verdictWords } from './words.js';
 
@@ -27,6 +28,20 @@ export function ShelfList({ answer, problem, busy, onMakePlan }: Props): ReactNo
             Tried {answer.evaluated} combinations of module, coil and ballast from the parts bin on {answer.engineName}, with the rev counter, leads and plugs as fitted now;{' '}
             {answer.withoutFail === 0 ? 'none passes every check.' : `${answer.withoutFail} pass every check without a “not like this”.`}
           </p>
+          {answer.leftOut.length > 0 ? (
+            <div className="shelf-left-out" data-testid="shelf-left-out">
+              <p>
+                Left out because every one you have is fitted to another engine (a plan there is marked wired or done):
+              </p>
+              <ul>
+                {answer.leftOut.map((p) => (
+                  <li key={p.partId} data-testid={`left-out-${p.partId}`}>
+                    <strong>{p.partName}</strong> ({kindWord(p.kind)}): {p.reason}
+                  </li>
+                ))}
+              </ul>
+            </div>
+          ) : null}
           {answer.suggestions.length === 0 ? (
             <p className="empty">The shelf has no module and coil to combine. Add them under Parts on the shelf.</p>
           ) : (
@@ -79,24 +94,26 @@ export function ShelfList({ answer, problem, busy, onMakePlan }: Props): ReactNo
   );
 }
 
+const kindWord = (kind: string): string => (kind in kindWords ? kindWords[kind as keyof typeof kindWords].one : kind);
+
 /**
- * While the search runs (in a worker thread, so the rest of the app answers): how long it has run,
- * asked once a second, and a way to stop it (the search then answers that it was stopped).
+ * While the search runs (in a worker thread, so the rest of the app answers): how far it has got
+ * and how long it has run, asked once a second, and a way to stop it (the search then answers that it was stopped).
  */
 function SearchRunning(): ReactNode {
-  const [seconds, setSeconds] = useState(0);
+  const [seen, setSeen] = useState({ seconds: 0, percent: 0 });
   const [stopping, setStopping] = useState(false);
   useEffect(() => {
     const timer = setInterval(() => {
       void call('check.progress', {}).then((r) => {
-        if (r.ok && r.value.running > 0) setSeconds(Math.round(r.value.elapsedMs / 1000));
+        if (r.ok && r.value.running > 0) setSeen({ seconds: Math.round(r.value.elapsedMs / 1000), percent: Math.floor(r.value.share * 100) });
       });
     }, 1000);
     return () => clearInterval(timer);
   }, []);
   return (
     <p className="quiet" data-testid="search-running">
-      Trying every combination in the parts bin…{seconds > 0 ? ` (${seconds} s so far)` : ''}{' '}
+      Trying every combination in the parts bin…{seen.seconds > 0 ? ` ${seen.percent} % done, ${seen.seconds} s so far.` : ''}{' '}
       <button
         type="button"
         className="small"
