@@ -18,15 +18,22 @@ import { DemoLoader } from './DemoLoader.js';
 import { Confirm } from './Dialog.js';
 import { LeaveGuardContext, type LeaveCheck, type LeaveGuard } from './leave-guard.js';
 import { Notice, type NoticeKind } from './Notice.js';
-import { screenOf, screens, type Route } from './routes.js';
+import { RemovalProvider, useRemovalNotice } from './removal.js';
+import { routeFromHash, routeToHash, screenOf, screens, type Route } from './routes.js';
+import { loadSettings, saveSettings, settingsNow, settingsProblem, useSettings } from './settings.js';
 import { UnitToggle } from './UnitToggle.js';
 import { Unreadable } from './Unreadable.js';
 
 type Flash = { kind: NoticeKind; text: string } | null;
 
 export function App(): ReactNode {
-  const [route, setRoute] = useState<Route>({ to: 'engines' });
-  const [current, setCurrentState] = useState<CurrentEngine | null>(loadCurrentEngine);
+  // The address names the screen after a reload; otherwise the last screen (from the settings, once read).
+  const [route, setRoute] = useState<Route>(() => routeFromHash(window.location.hash) ?? { to: 'engines' });
+  // Screens wait for the settings (mm/inch, the engine worked on, ticked plans) so none starts on a default.
+  const [settled, setSettled] = useState(false);
+  const [current, setCurrentState] = useState<CurrentEngine | null>(null);
+  // Re-render when a setting changes, so a refused write (put back from the store) is explained.
+  useSettings();
   const [bench, setBenchState] = useState<BenchPlan | null>(loadBenchPlan);
   const [pending, setPending] = useState<{ route: Route; what: string } | null>(null);
   const [flash, setFlash] = useState<Flash>(null);
@@ -34,6 +41,7 @@ export function App(): ReactNode {
   const [info, setInfo] = useState<ResponseOf<'app.info'> | null>(null);
   const checkRef = useRef<LeaveCheck | null>(null);
   const mainRef = useRef<HTMLElement>(null);
+  const removal = useRemovalNotice(() => setListVersion((v) => v + 1));
 
   const guard = useMemo<LeaveGuard>(
     () => ({
@@ -80,15 +88,37 @@ export function App(): ReactNode {
     });
   }, []);
 
-  // The remembered engine may have been deleted elsewhere; check it still exists and its name.
+  // On start: the settings, then the remembered engine (it may have been deleted elsewhere) and,
+  // unless the address names a screen, the screen the person was last on.
   useEffect(() => {
-    if (!current) return;
-    void call('engines.get', { id: current.id }).then((r) => {
-      if (r.ok && r.value.name !== current.name) setCurrent({ id: r.value.id, name: r.value.name });
-      if (!r.ok && r.error.code === 'NOT_FOUND') setCurrent(null);
-    });
+    let live = true;
+    void (async () => {
+      const s = await loadSettings();
+      if (!live) return;
+      // The id at once (screens start on it); its name, or that it is gone, one answer later.
+      const remembered = s.workingEngineId;
+      if (remembered !== null) setCurrentState({ id: remembered, name: '' });
+      if (routeFromHash(window.location.hash) === null) setRoute({ to: s.lastScreen });
+      setSettled(true);
+      if (remembered === null) return;
+      const engine = await loadCurrentEngine();
+      if (live) setCurrentState((c) => (c && c.id === remembered && c.name === '' ? engine : c));
+    })();
+    return () => {
+      live = false;
+    };
     // Only on start: later changes come from the screens themselves.
   }, []);
+
+  // The address follows the screen (replaceState: no history entry, nothing reloads), and the
+  // settings keep the screen for the next start.
+  useEffect(() => {
+    if (!settled) return;
+    const hash = routeToHash(route);
+    if (window.location.hash !== hash) window.history.replaceState(null, '', `${window.location.pathname}${window.location.search}${hash}`);
+    const screen = screenOf(route);
+    if (settingsNow().lastScreen !== screen) void saveSettings({ lastScreen: screen });
+  }, [route, settled]);
 
   // The same for the plan on the bench.
   useEffect(() => {
@@ -126,13 +156,12 @@ export function App(): ReactNode {
           onDeleted={(id) => {
             if (current?.id === id) setCurrent(null);
             if (bench?.engineId === id) setBench(null);
-            setFlash({ kind: 'done', text: 'The engine was deleted.' });
           }}
         />
       );
       break;
     case 'parts':
-      screen = <PartsScreen route={route} navigate={navigate} leave={go} version={listVersion} onDeleted={(name) => setFlash({ kind: 'done', text: `${name} was deleted.` })} />;
+      screen = <PartsScreen route={route} navigate={navigate} leave={go} version={listVersion} />;
       break;
     case 'combination':
       screen = <WeighScreen current={current} onEngineChosen={setCurrent} navigate={navigate} />;
@@ -141,12 +170,13 @@ export function App(): ReactNode {
       screen = <SheetScreen planId={route.planId ?? null} current={current} bench={bench} onEngineChosen={setCurrent} onPlanChosen={setBench} navigate={navigate} />;
       break;
     case 'records':
-      screen = <RecordsScreen onChanged={() => setListVersion((v) => v + 1)} />;
+      screen = <RecordsScreen onChanged={() => setListVersion((v) => v + 1)} version={listVersion} />;
       break;
   }
 
   return (
     <LeaveGuardContext.Provider value={guard}>
+      <RemovalProvider value={removal.announce}>
       <a className="skip-link" href="#main">
         Skip to the screen
       </a>
@@ -205,8 +235,14 @@ export function App(): ReactNode {
                 {flash.text}
               </Notice>
             ) : null}
+            {removal.notice}
+            {settingsProblem() ? (
+              <Notice kind="problem" testId="settings-problem">
+                {settingsProblem()}
+              </Notice>
+            ) : null}
             <Unreadable version={listVersion} onChanged={() => setListVersion((v) => v + 1)} />
-            {screen}
+            {settled ? screen : <p className="quiet" data-testid="opening">Opening the workshop…</p>}
           </main>
         </div>
       </div>
@@ -227,6 +263,7 @@ export function App(): ReactNode {
           <p>{pending.what} has changes that are not saved. Leaving now throws them away.</p>
         </Confirm>
       ) : null}
+      </RemovalProvider>
     </LeaveGuardContext.Provider>
   );
 }

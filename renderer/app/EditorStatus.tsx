@@ -1,47 +1,93 @@
 /**
- * The pieces at the top of an editor: the "Unsaved changes" badge, the status line after a save,
+ * The pieces of an editor: the "Typed, not saved yet" label, the note after a save,
  * and the whole screen shown instead when the record cannot be opened.
  */
 import type { ReactNode } from 'react';
 import { fieldId } from './fields.js';
 import type { Messages, SaveStatus } from './form-save.js';
 import { Notice } from './Notice.js';
+import { problemLines, type ProblemLine } from './problem-lines.js';
 
 export function UnsavedBadge({ testId }: { testId: string }): ReactNode {
   return (
     <span className="badge" data-testid={testId}>
-      <span aria-hidden="true">●</span> Unsaved changes
+      Typed, not saved yet
     </span>
   );
 }
 
+/** Lines in the order their fields stand in the form (read after the fields are drawn); lines without a field last. */
+function inFormOrder(lines: ProblemLine[]): ProblemLine[] {
+  const at = (l: ProblemLine): Element | null => (typeof document === 'undefined' ? null : document.getElementById(fieldId(l.path)));
+  return lines
+    .map((l, i) => ({ l, i, el: at(l) }))
+    .sort((a, b) => {
+      if (a.el && b.el) return a.el === b.el ? a.i - b.i : a.el.compareDocumentPosition(b.el) & Node.DOCUMENT_POSITION_FOLLOWING ? -1 : 1;
+      if (a.el || b.el) return a.el ? -1 : 1;
+      return a.i - b.i;
+    })
+    .map((x) => x.l);
+}
+
 /**
- * The status line; a refused save lists every message, each a button to its field. A save refused
- * because the record changed elsewhere offers to reload the saved version (`onReload`).
+ * The list of things to fix, as a punch list on the note: a number, the field as the form labels
+ * it (unit included) and what is wrong; each line takes you to its field.
  */
-export function EditorStatus({ status, summary, onDismiss, onReload }: { status: SaveStatus; summary: Messages; onDismiss: () => void; onReload?: () => void }): ReactNode {
+export function FixList({ messages, nameOf }: { messages: Messages; nameOf?: (path: string) => string | undefined }): ReactNode {
+  const lines = inFormOrder(problemLines(messages, nameOf ?? (() => undefined)));
+  if (lines.length === 0) return null;
   return (
-    <Notice kind={status.kind} onDismiss={onDismiss} testId="editor-status">
+    <div className="fix-list" data-testid="fix-list">
+      <p className="fix-head">
+        <strong>Needs fixing before saving</strong> <span className="fix-count">{lines.length === 1 ? '1 thing' : `${lines.length} things`}</span>
+      </p>
+      <ol className="fix-lines">
+        {lines.map((l, i) => (
+          <li key={l.path}>
+            <button type="button" className="fix-line" onClick={() => document.getElementById(fieldId(l.path))?.focus()} data-path={l.path}>
+              <span className="fix-no" aria-hidden="true">
+                {i + 1}
+              </span>
+              <span className="fix-words">
+                {l.name ? <span className="fix-name">{l.name}: </span> : null}
+                <span className="fix-what">{l.text}</span>
+              </span>
+              <span className="fix-go" aria-hidden="true">
+                go to it
+              </span>
+            </button>
+          </li>
+        ))}
+      </ol>
+    </div>
+  );
+}
+
+/**
+ * The note after a save. A refused save lists every thing to fix, each a button to its field; a
+ * save refused because the record changed elsewhere offers to reload the saved version
+ * (`onReload`). `takeFocus` moves focus to the note (after a save, where the person is looking).
+ */
+export function EditorStatus({ status, summary, onDismiss, onReload, nameOf, takeFocus, className }: {
+  status: SaveStatus;
+  summary: Messages;
+  onDismiss: () => void;
+  onReload?: () => void;
+  nameOf?: (path: string) => string | undefined;
+  takeFocus?: boolean;
+  className?: string;
+}): ReactNode {
+  return (
+    <Notice
+      kind={status.kind}
+      onDismiss={onDismiss}
+      testId="editor-status"
+      takeFocus={takeFocus}
+      className={className}
+      action={status.stale && onReload ? { label: 'Reload the saved version', onClick: onReload, testId: 'reload-record' } : undefined}
+    >
       {status.text}
-      {status.stale && onReload ? (
-        <>
-          {' '}
-          <button type="button" onClick={onReload} data-testid="reload-record">
-            Reload the saved version
-          </button>
-        </>
-      ) : null}
-      {Object.keys(summary).length > 0 ? (
-        <ul className="error-summary">
-          {Object.entries(summary).map(([path, message]) => (
-            <li key={path}>
-              <button type="button" className="link" onClick={() => document.getElementById(fieldId(path))?.focus()}>
-                {message}
-              </button>
-            </li>
-          ))}
-        </ul>
-      ) : null}
+      <FixList messages={summary} nameOf={nameOf} />
     </Notice>
   );
 }

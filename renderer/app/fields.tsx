@@ -3,11 +3,23 @@
  * unit in the label, and shows the message for that path right beside it (linked with
  * aria-describedby so a screen reader reads it with the field).
  */
-import { createContext, useContext, useRef, type ReactNode } from 'react';
+import { createContext, useContext, useLayoutEffect, useRef, type ReactNode } from 'react';
 import type { Part } from '../../db/schema.js';
+import { NoticeMark } from './Notice.js';
 
-export type FieldErrors = { message(path: string): string | undefined; touch(path: string): void };
+/**
+ * What a form's fields share: the message for a path, "this one was touched", and `name`, which
+ * each field calls with its visible label (unit included) so the list of things to fix names the
+ * field exactly as the form shows it.
+ */
+export type FieldErrors = { message(path: string): string | undefined; touch(path: string): void; name?(path: string, label: string): void };
 export const FieldErrorsContext = createContext<FieldErrors>({ message: () => undefined, touch: () => {} });
+
+/** Tells the form the words a field is shown with (its label, unit included). */
+export function useFieldName(path: string, label: string): void {
+  const ctx = useContext(FieldErrorsContext);
+  useLayoutEffect(() => ctx.name?.(path, label), [ctx, path, label]);
+}
 
 export const fieldId = (path: string): string => `f-${path.replace(/\./g, '-')}`;
 
@@ -30,16 +42,22 @@ export function useTouchAfterEdit(path: string): { onEdit: () => void; onLeave: 
 }
 const errorId = (path: string): string => `e-${path.replace(/\./g, '-')}`;
 
+/** The message tab under a field: a notch pointing up at the box, the open-contact mark, the words. */
+export function FieldMessageTab({ path, message }: { path: string; message: string }): ReactNode {
+  return (
+    <span className="field-error" id={errorId(path)} data-testid={`error-${path}`}>
+      <NoticeMark kind="problem" />
+      <span className="field-error-words">{message}</span>
+    </span>
+  );
+}
+
 function FieldMessage({ path, hint }: { path: string; hint?: string | undefined }): ReactNode {
   const message = useContext(FieldErrorsContext).message(path);
   return (
     <>
       {hint && !message ? <span className="hint" id={`h-${fieldId(path)}`}>{hint}</span> : null}
-      {message ? (
-        <span className="field-error" id={errorId(path)} data-testid={`error-${path}`}>
-          <span aria-hidden="true" className="icon">!</span> {message}
-        </span>
-      ) : null}
+      {message ? <FieldMessageTab path={path} message={message} /> : null}
     </>
   );
 }
@@ -63,6 +81,7 @@ type TextProps = {
 /** A text box; numbers are typed as text too, so a half-typed value is never lost or NaN. */
 export function TextField({ path, label, value, onChange, hint, numeric, wide, placeholder }: TextProps): ReactNode {
   const ctx = useContext(FieldErrorsContext);
+  useFieldName(path, label);
   const touch = useTouchAfterEdit(path);
   const message = ctx.message(path);
   return (
@@ -93,6 +112,7 @@ export function TextField({ path, label, value, onChange, hint, numeric, wide, p
 
 export function NotesField({ path, label, value, onChange }: Omit<TextProps, 'numeric'>): ReactNode {
   const ctx = useContext(FieldErrorsContext);
+  useFieldName(path, label);
   const touch = useTouchAfterEdit(path);
   const message = ctx.message(path);
   return (
@@ -128,6 +148,7 @@ export function SelectField<T extends string>(props: {
 }): ReactNode {
   const { path, label, value, choices, onChange, hint } = props;
   const ctx = useContext(FieldErrorsContext);
+  useFieldName(path, label);
   const message = ctx.message(path);
   return (
     <div className={`field${message ? ' has-error' : ''}`}>
@@ -156,6 +177,7 @@ export function SelectField<T extends string>(props: {
 
 export function CheckField({ path, label, checked, onChange, hint }: { path: string; label: string; checked: boolean; onChange: (v: boolean) => void; hint?: string }): ReactNode {
   const message = useContext(FieldErrorsContext).message(path);
+  useFieldName(path, label);
   return (
     <div className={`field check${message ? ' has-error' : ''}`}>
       <input

@@ -4,7 +4,7 @@
  * refusal from the store puts its field messages beside the fields. Either way focus moves to the
  * first field named (or to the heading) and everything typed stays in the form.
  */
-import { useMemo, useState, type FormEvent, type RefObject } from 'react';
+import { useCallback, useMemo, useRef, useState, type FormEvent, type RefObject } from 'react';
 import type { Result } from '../../electron/ipc/channels.js';
 import { fieldId, type FieldErrors } from './fields.js';
 
@@ -59,14 +59,18 @@ export function useFormSave(clientErrors: Messages, heading: RefObject<HTMLEleme
   const [submitted, setSubmitted] = useState(false);
   const [serverErrors, setServerErrors] = useState<Messages>({});
   const [saving, setSaving] = useState(false);
+  // Each field's visible label (unit included), told by the field itself: the list of things to fix names fields by it.
+  const names = useRef(new Map<string, string>());
 
   const errorsCtx = useMemo<FieldErrors>(
     () => ({
       message: (path) => ((submitted || touched.has(path)) && clientErrors[path]) || serverErrors[path],
       touch: (path) => setTouched((t) => (t.has(path) ? t : new Set(t).add(path))),
+      name: (path, label) => void names.current.set(path, label),
     }),
     [clientErrors, serverErrors, submitted, touched],
   );
+  const fieldName = useCallback((path: string): string | undefined => names.current.get(path), []);
 
   const save = async <I, V>(e: FormEvent | undefined, check: Checked<I>, steps: SaveSteps<I, V>): Promise<void> => {
     e?.preventDefault();
@@ -74,7 +78,7 @@ export function useFormSave(clientErrors: Messages, heading: RefObject<HTMLEleme
     setSubmitted(true);
     setServerErrors({});
     if (!check.ok) {
-      steps.problem(`Some values need correcting before ${steps.what} can be saved. Nothing has been saved yet.`);
+      steps.problem(`Nothing has been saved yet: fix what is listed here, then save ${steps.what} again.`);
       return focusFirstError(check.errors, heading, order);
     }
     setSaving(true);
@@ -95,5 +99,5 @@ export function useFormSave(clientErrors: Messages, heading: RefObject<HTMLEleme
     setTouched(new Set());
   };
 
-  return { errorsCtx, submitted, serverErrors, setServerErrors, saving, save, settle };
+  return { errorsCtx, submitted, serverErrors, setServerErrors, saving, save, settle, fieldName };
 }

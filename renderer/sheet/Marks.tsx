@@ -1,8 +1,8 @@
 /**
  * The sheet's small marks, drawn as SVG so they print without "background graphics": a reading's
  * place against its band (low: a wedge pointing down; high: pointing up; in range: a ring) and the
- * caution mark (a triangle with "!"). Each always travels with words; the shape is the second
- * channel and the colour (set by the class on screen) the third.
+ * caution mark (a triangle with "!"), and the verdict's spark-gap mark. Each always travels with
+ * words; the shape is the second channel and the colour the third.
  */
 import type { ReactNode } from 'react';
 import type { Band } from './model.js';
@@ -28,29 +28,39 @@ export function CautionMark(): ReactNode {
   );
 }
 
-/** The verdict's shape as the weighing screen draws it (circle, triangle, octagon), in outline so it prints. */
-export function VerdictMark({ verdict }: { verdict: 'pass' | 'caution' | 'fail' }): ReactNode {
+/**
+ * The verdict colours, chosen to differ in lightness (so they stay apart in grey and for red-green
+ * colour blindness): a mid blue, a light ochre, a deep crimson. Carried by the mark itself, so the
+ * screen, the command line's HTML and the print all show the same.
+ */
+export const verdictColours = { pass: '#2a7fc0', caution: '#e0a000', fail: '#6b1020' } as const;
+const electrode = '#3a434b';
+
+/**
+ * The verdict as a spark plug's gap seen from the side: the centre electrode above, the earth
+ * strap below, and what happens between them. Fine: a full spark jumps the gap (a solid bolt with
+ * rays). Take care: a thin broken spark that barely makes it. Not like this: no spark, the gap
+ * crossed out. Drawn as filled SVG shapes so it prints without background graphics.
+ */
+export function VerdictMark({ verdict, size = 22 }: { verdict: 'pass' | 'caution' | 'fail'; size?: number }): ReactNode {
+  const c = verdictColours[verdict];
   return (
-    <svg className={`verdict-mark mark-${verdict}`} viewBox="0 0 20 20" width={20} height={20} aria-hidden="true" focusable="false">
+    <svg className={`verdict-mark mark-${verdict}`} viewBox="0 0 24 24" width={size} height={size} aria-hidden="true" focusable="false" data-mark={verdict}>
+      {/* insulator nose and centre electrode */}
+      <polygon points="7.5,0 16.5,0 14.8,2.4 9.2,2.4" fill={electrode} />
+      <rect x={10.3} y={2.4} width={3.4} height={3.8} fill={electrode} />
+      {/* earth strap, bent in under the centre electrode */}
+      <path d="M3.2 24 V20.3 H15" fill="none" stroke={electrode} strokeWidth={2.4} strokeLinejoin="round" />
       {verdict === 'pass' ? (
         <>
-          <circle cx={10} cy={10} r={8.5} fill="none" stroke="currentColor" strokeWidth={2.2} />
-          <polyline points="5.5,10.5 8.8,13.6 14.5,6.8" fill="none" stroke="currentColor" strokeWidth={2.4} />
+          <polygon points="15.2,6.4 7.6,13.4 11.6,13.4 8.6,19.2 17.2,11.4 13.2,11.4 16.8,6.4" fill={c} />
+          <path d="M18.6 8.6 L22.6 6.8 M19 14.2 L23 15.6 M5.6 8.8 L1.6 7 M5.2 14.6 L1.2 16" stroke={c} strokeWidth={1.9} strokeLinecap="round" />
         </>
       ) : null}
       {verdict === 'caution' ? (
-        <>
-          <polygon points="10,1.5 18.8,18 1.2,18" fill="none" stroke="currentColor" strokeWidth={2.2} strokeLinejoin="round" />
-          <line x1={10} y1={7} x2={10} y2={12.5} stroke="currentColor" strokeWidth={2.4} />
-          <circle cx={10} cy={15.2} r={1.3} fill="currentColor" />
-        </>
+        <polyline points="12,6.6 9,11.2 14.2,13.2 11,18.8" fill="none" stroke={c} strokeWidth={2.4} strokeDasharray="3 2.2" strokeLinecap="round" strokeLinejoin="round" />
       ) : null}
-      {verdict === 'fail' ? (
-        <>
-          <polygon points="6,1.2 14,1.2 18.8,6 18.8,14 14,18.8 6,18.8 1.2,14 1.2,6" fill="none" stroke="currentColor" strokeWidth={2.2} />
-          <path d="M6.5 6.5 L13.5 13.5 M13.5 6.5 L6.5 13.5" stroke="currentColor" strokeWidth={2.4} />
-        </>
-      ) : null}
+      {verdict === 'fail' ? <path d="M7.4 8.6 L16.6 17.8 M16.6 8.6 L7.4 17.8" stroke={c} strokeWidth={3} strokeLinecap="round" /> : null}
     </svg>
   );
 }

@@ -61,7 +61,6 @@ export const bandWords: Record<Band, string> = { in: 'In range', low: 'Low', hig
 
 /** Our words for the checker's verdicts (the same as the weighing screen's). */
 export const verdictWords: Record<VerdictValue, string> = { pass: 'Fine', caution: 'Take care', fail: 'Not like this' };
-export const verdictIcons: Record<VerdictValue, string> = { pass: '✓', caution: '!', fail: '✕' };
 
 export const statusWords: Record<PlanStatus, string> = { draft: 'Idea', checked: 'Weighed', wired: 'Wired in', done: 'Finished' };
 

@@ -141,9 +141,9 @@ describe('the wiring sheet', () => {
     const mine = stored.find((x) => x.value === low)!;
     expect(mine).toMatchObject({ unit: 'ohm', note: 'bench, meter leads zeroed' });
 
-    // Reload: the route goes back to the engines; the bench chip brings the sheet back with its tick and reading.
+    // Reload: the address keeps the screen, so the sheet comes back; the bench chip opens it too, with its tick and reading.
     await page.reload();
-    await page.getByRole('heading', { level: 1, name: 'Engines' }).waitFor();
+    await page.getByRole('heading', { level: 1, name: 'Wiring sheet' }).waitFor();
     await page.getByTestId('bench-plan').click();
     await page.getByRole('heading', { level: 1, name: 'Wiring sheet' }).waitFor();
     for (const s of fitting) await expect.poll(() => page.getByTestId(`tick-${s.key}`).isChecked()).toBe(true);

@@ -35,7 +35,7 @@ async function cardVerdict(page: Page, index: number): Promise<string> {
   const badge = page.getByTestId(`verdict-${index}`);
   await badge.waitFor();
   const verdict = (await badge.getAttribute('data-verdict'))!;
-  expect(await badge.locator(`.verdict-icon.shape-${verdict}`).count()).toBe(1);
+  expect(await badge.locator(`svg.verdict-mark.mark-${verdict}`).count()).toBe(1);
   return (await badge.locator('.verdict-word').innerText()).trim();
 }
 

@@ -1,10 +1,11 @@
 /**
  * The distributor's mechanical advance curve as a small table: engine rpm against the degrees the
  * weights add on top of the static setting. Rows can be added and removed; each cell carries its
- * own message (path "advanceCurve.<row>.rpm").
+ * own message (path "advanceCurve.<row>.rpm"). A row left wholly blank is not part of the curve
+ * (form-model.ts leaves it out), so a new row shows nothing until something is typed in it.
  */
 import { useContext, useRef, type ReactNode } from 'react';
-import { FieldErrorsContext, fieldId, useTouchAfterEdit } from '../../app/fields.js';
+import { FieldErrorsContext, FieldMessageTab, fieldId, useFieldName, useTouchAfterEdit } from '../../app/fields.js';
 import { Group } from '../../app/Group.js';
 import { nextRowKey, type EngineForm } from './form-model.js';
 import type { Update } from './sections-engine.js';
@@ -13,6 +14,7 @@ function Cell({ path, label, value, onChange }: { path: string; label: string; v
   const ctx = useContext(FieldErrorsContext);
   const touch = useTouchAfterEdit(path);
   const message = ctx.message(path);
+  useFieldName(path, label);
   const errId = `e-${path.replace(/\./g, '-')}`;
   return (
     <td className={message ? 'has-error' : undefined}>
@@ -31,11 +33,7 @@ function Cell({ path, label, value, onChange }: { path: string; label: string; v
         }}
         onBlur={touch.onLeave}
       />
-      {message ? (
-        <span className="field-error" id={errId} data-testid={`error-${path}`}>
-          <span aria-hidden="true" className="icon">!</span> {message}
-        </span>
-      ) : null}
+      {message ? <FieldMessageTab path={path} message={message} /> : null}
     </td>
   );
 }

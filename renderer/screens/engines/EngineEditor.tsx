@@ -81,7 +81,7 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
   useLeaveGuard(dirty, savedName ? `“${savedName}”` : 'This new engine');
 
   const clientErrors = check && !check.ok ? check.errors : {};
-  const { errorsCtx, submitted, serverErrors, saving, save: saveForm, settle } = useFormSave(clientErrors, headingRef);
+  const { errorsCtx, submitted, serverErrors, saving, save: saveForm, settle, fieldName } = useFormSave(clientErrors, headingRef);
 
   const del = useDeleteEngine(
     (deletedId) => {
@@ -131,10 +131,11 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
         </h1>
         {dirty ? <UnsavedBadge testId="unsaved" /> : null}
       </div>
-      {status ? (
+      {status?.kind === 'problem' ? (
         <EditorStatus
           status={status}
           summary={summary}
+          nameOf={fieldName}
           onDismiss={() => setStatus(null)}
           onReload={() => {
             setStatus(null);
@@ -155,6 +156,8 @@ export function EngineEditor({ id, navigate, leave, onOpened, onDeleted }: Props
             <ConditionsSection form={form} update={update} />
           </div>
           <div className="form-actions">
+            {/* After a save the note sits by the save button, where the person is looking, and takes focus. */}
+            {status?.kind === 'done' ? <EditorStatus status={status} summary={{}} onDismiss={() => setStatus(null)} takeFocus className="tag-by-save" /> : null}
             <button type="submit" className="primary" disabled={saving}>
               {saving ? 'Saving…' : 'Save the engine'}
             </button>

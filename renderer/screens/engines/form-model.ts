@@ -8,6 +8,7 @@ import { conditionDescriptors, conditionKeys, engineInput, fieldMessages, toStor
 import { numberToText, parseNumberText, parseOptionalNumberText } from '../../app/numbers.js';
 import { gapFromMm, gapPrint, type GapValue } from '../../app/gaps.js';
 import type { GapUnit } from '../../app/units.js';
+import { checkInOnePass } from '../../app/one-pass.js';
 
 export type CurveRow = { key: number; rpm: string; advanceDeg: string };
 
@@ -181,86 +182,100 @@ export const numberLabels: Record<string, string> = {
 
 export type FormCheck = { ok: true; input: EngineInput } | { ok: false; errors: Record<string, string> };
 
-/** Reads the form into an EngineInput and checks it exactly as the store will. */
+/** A curve row with nothing typed in either box is not part of the curve (a row just added). */
+const blankRow = (r: CurveRow): boolean => r.rpm.trim() === '' && r.advanceDeg.trim() === '';
+
+/**
+ * Reads the form into an EngineInput and checks it exactly as the store will, every check in one
+ * pass (app/one-pass.ts): a cross-field message shows beside a letter typed in another box. Curve
+ * rows left wholly blank are left out; messages keep the row numbers the form shows.
+ */
 export function formToInput(f: EngineForm): FormCheck {
-  const errors: Record<string, string> = {};
-  const num = (path: string, text: string): number => {
-    const p = parseNumberText(text, numberLabels[path] ?? 'This value');
-    if (p.ok) return p.value;
-    errors[path] = p.message;
-    return Number.NaN; // never sent: the errors above stop the save
+  const own: Record<string, string> = {};
+  // Rows sent, by their place in the form (blank rows skipped), so the store's paths map back.
+  const rowsSent = f.advanceCurve.map((r, i) => (blankRow(r) ? -1 : i)).filter((i) => i >= 0);
+  const build = (standIn: number): unknown => {
+    const num = (path: string, text: string): number => {
+      const p = parseNumberText(text, numberLabels[path] ?? 'This value');
+      if (p.ok) return p.value;
+      own[path] = p.message;
+      return standIn; // never sent: the message above stops the save
+    };
+    const opt = (path: string, text: string): number | null => {
+      const p = parseOptionalNumberText(text, numberLabels[path] ?? 'This value');
+      if (p.ok) return p.value;
+      own[path] = p.message;
+      return standIn;
+    };
+    const gap = (path: string, g: GapValue): number => {
+      if (g.mm !== null) return g.mm;
+      const p = parseNumberText(g.text, numberLabels[path] ?? 'Gap');
+      own[path] = p.ok ? `${numberLabels[path] ?? 'Gap'} could not be read.` : p.message;
+      return standIn;
+    };
+    const partId = (v: string): number | null => (v === '' ? null : Number(v));
+    const magneto = f.existing.trigger === 'magneto';
+    const conditions: Record<string, number> = {};
+    for (const d of conditionDescriptors) {
+      const v = opt(`conditions.${d.key}`, f.conditions[d.key]);
+      if (v !== null) conditions[d.key] = toStored(d, v);
+    }
+    return {
+      name: f.name,
+      yearText: f.yearText.trim(),
+      modelText: f.modelText.trim(),
+      notes: f.notes,
+      cylinders: num('cylinders', f.cylinders),
+      cycle: f.cycle,
+      firingOrder: f.firingOrder.trim().replace(/\s*-\s*/g, '-'),
+      boreMm: num('boreMm', f.boreMm),
+      strokeMm: num('strokeMm', f.strokeMm),
+      conRodMm: num('conRodMm', f.conRodMm),
+      compressionRatio: num('compressionRatio', f.compressionRatio),
+      idleRpm: num('idleRpm', f.idleRpm),
+      crankingRpm: num('crankingRpm', f.crankingRpm),
+      redlineRpm: num('redlineRpm', f.redlineRpm),
+      systemVoltageV: f.systemVoltageV === '6' ? 6 : 12,
+      earthPolarity: f.earthPolarity,
+      charging: f.charging,
+      pointsDwellDeg: num('pointsDwellDeg', f.pointsDwellDeg),
+      pointsGapMm: gap('pointsGapMm', f.pointsGap),
+      pointsFloatRpm: opt('pointsFloatRpm', f.pointsFloatRpm),
+      staticTimingDegBtdc: num('staticTimingDegBtdc', f.staticTimingDegBtdc),
+      advanceCurve: rowsSent.map((i) => ({
+        rpm: num(`advanceCurve.${i}.rpm`, f.advanceCurve[i]!.rpm),
+        advanceDeg: num(`advanceCurve.${i}.advanceDeg`, f.advanceCurve[i]!.advanceDeg),
+      })),
+      existing: {
+        trigger: f.existing.trigger,
+        coilPartId: partId(f.existing.coilPartId),
+        ballast: f.existing.ballast,
+        ballastPartId: f.existing.ballast === 'none' ? null : partId(f.existing.ballastPartId),
+        crankingBypass: f.existing.ballast === 'none' ? false : f.existing.crankingBypass,
+        coilWiring: magneto ? 'as-marked-for-earth' : f.existing.coilWiring,
+        condenserUf: opt('existing.condenserUf', f.existing.condenserUf),
+        tachPartId: partId(f.existing.tachPartId),
+        leadsPartId: partId(f.existing.leadsPartId),
+        plugPartId: partId(f.existing.plugPartId),
+        plugGapMm: gap('existing.plugGapMm', f.existing.plugGap),
+        magnetoRatedCurrentA: magneto ? opt('existing.magnetoRatedCurrentA', f.existing.magnetoRatedCurrentA) : null,
+        magnetoFullOutputRpm: magneto ? opt('existing.magnetoFullOutputRpm', f.existing.magnetoFullOutputRpm) : null,
+      },
+      conditions,
+    };
   };
-  const opt = (path: string, text: string): number | null => {
-    const p = parseOptionalNumberText(text, numberLabels[path] ?? 'This value');
-    if (p.ok) return p.value;
-    errors[path] = p.message;
-    return null;
+  const toMessages = (error: Parameters<typeof fieldMessages>[0]): Record<string, string> => {
+    const out: Record<string, string> = {};
+    for (const [path, message] of Object.entries(fieldMessages(error))) {
+      // The schema counts only the rows sent; the form's row numbers include blank ones.
+      const row = /^advanceCurve\.(\d+)(\..*)?$/.exec(path);
+      const shownPath = row ? `advanceCurve.${rowsSent[Number(row[1])] ?? row[1]}${row[2] ?? ''}` : path;
+      // A condition's range names the plan file's SI key too; beside a box typed in kPa or pF that is noise.
+      out[shownPath] = path.startsWith('conditions.') ? message.replace(/ \(in the file, [^)]*\)/, '') : message;
+    }
+    return out;
   };
-  const gap = (path: string, g: GapValue): number => {
-    if (g.mm !== null) return g.mm;
-    const p = parseNumberText(g.text, numberLabels[path] ?? 'Gap');
-    errors[path] = p.ok ? `${numberLabels[path] ?? 'Gap'} could not be read.` : p.message;
-    return Number.NaN;
-  };
-  const partId = (v: string): number | null => (v === '' ? null : Number(v));
-  const magneto = f.existing.trigger === 'magneto';
-  const conditions: Record<string, number> = {};
-  for (const d of conditionDescriptors) {
-    const v = opt(`conditions.${d.key}`, f.conditions[d.key]);
-    if (v !== null) conditions[d.key] = toStored(d, v);
-  }
-  const candidate = {
-    name: f.name,
-    yearText: f.yearText.trim(),
-    modelText: f.modelText.trim(),
-    notes: f.notes,
-    cylinders: num('cylinders', f.cylinders),
-    cycle: f.cycle,
-    firingOrder: f.firingOrder.trim().replace(/\s*-\s*/g, '-'),
-    boreMm: num('boreMm', f.boreMm),
-    strokeMm: num('strokeMm', f.strokeMm),
-    conRodMm: num('conRodMm', f.conRodMm),
-    compressionRatio: num('compressionRatio', f.compressionRatio),
-    idleRpm: num('idleRpm', f.idleRpm),
-    crankingRpm: num('crankingRpm', f.crankingRpm),
-    redlineRpm: num('redlineRpm', f.redlineRpm),
-    systemVoltageV: f.systemVoltageV === '6' ? 6 : 12,
-    earthPolarity: f.earthPolarity,
-    charging: f.charging,
-    pointsDwellDeg: num('pointsDwellDeg', f.pointsDwellDeg),
-    pointsGapMm: gap('pointsGapMm', f.pointsGap),
-    pointsFloatRpm: opt('pointsFloatRpm', f.pointsFloatRpm),
-    staticTimingDegBtdc: num('staticTimingDegBtdc', f.staticTimingDegBtdc),
-    advanceCurve: f.advanceCurve.map((row, i) => ({
-      rpm: num(`advanceCurve.${i}.rpm`, row.rpm),
-      advanceDeg: num(`advanceCurve.${i}.advanceDeg`, row.advanceDeg),
-    })),
-    existing: {
-      trigger: f.existing.trigger,
-      coilPartId: partId(f.existing.coilPartId),
-      ballast: f.existing.ballast,
-      ballastPartId: f.existing.ballast === 'none' ? null : partId(f.existing.ballastPartId),
-      crankingBypass: f.existing.ballast === 'none' ? false : f.existing.crankingBypass,
-      coilWiring: magneto ? 'as-marked-for-earth' : f.existing.coilWiring,
-      condenserUf: opt('existing.condenserUf', f.existing.condenserUf),
-      tachPartId: partId(f.existing.tachPartId),
-      leadsPartId: partId(f.existing.leadsPartId),
-      plugPartId: partId(f.existing.plugPartId),
-      plugGapMm: gap('existing.plugGapMm', f.existing.plugGap),
-      magnetoRatedCurrentA: magneto ? opt('existing.magnetoRatedCurrentA', f.existing.magnetoRatedCurrentA) : null,
-      magnetoFullOutputRpm: magneto ? opt('existing.magnetoFullOutputRpm', f.existing.magnetoFullOutputRpm) : null,
-    },
-    conditions,
-  };
-  const parsed = engineInput.safeParse(candidate);
-  if (parsed.success && Object.keys(errors).length === 0) return { ok: true, input: parsed.data };
-  // Our own "type a number" messages win over zod's, which only sees the NaN we put in their place.
-  const fromSchema = parsed.success ? {} : fieldMessages(parsed.error);
-  // A condition's range names the plan file's SI key too; beside a box typed in kPa or pF that is noise.
-  for (const [path, message] of Object.entries(fromSchema)) {
-    if (path.startsWith('conditions.')) fromSchema[path] = message.replace(/ \(in the file, [^)]*\)/, '');
-  }
-  return { ok: false, errors: { ...fromSchema, ...errors } };
+  return checkInOnePass(engineInput, build, own, toMessages);
 }
 
 /** A fingerprint for "has anything changed?": gaps compared by their millimetres, not their text. */

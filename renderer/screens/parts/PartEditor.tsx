@@ -21,10 +21,9 @@ type Props = {
   navigate: Navigate;
   /** Moves without the unsaved-changes question (after a delete, nothing is left to lose). */
   leave: Navigate;
-  onDeleted: (name: string) => void;
 };
 
-export function PartEditor({ target, navigate, leave, onDeleted }: Props): ReactNode {
+export function PartEditor({ target, navigate, leave }: Props): ReactNode {
   const [unit] = useGapUnit();
   const isNew = 'newKind' in target;
   const [partId, setPartId] = useState<number | null>(isNew ? null : target.id);
@@ -60,7 +59,7 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
 
   const check = useMemo(() => (form ? formToInput(form, unit) : null), [form, unit]);
   const clientErrors = check && !check.ok ? check.errors : {};
-  const { errorsCtx, submitted, serverErrors, setServerErrors, saving, save: saveForm, settle } = useFormSave(clientErrors, headingRef);
+  const { errorsCtx, submitted, serverErrors, setServerErrors, saving, save: saveForm, settle, fieldName } = useFormSave(clientErrors, headingRef);
 
   // The store's "its kind cannot change" was about the kind sent; choosing another kind answers it.
   const kind = form?.kind;
@@ -76,10 +75,9 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
   useLeaveGuard(dirty, saved ? `“${saved.name}”` : 'This new part');
 
   const del = useDeletePart(
-    (t) => {
-      // Leave first: moving clears the frame's status line, and the "deleted" line must survive it.
+    () => {
+      // The note with its Undo comes from the delete itself and outlives the move.
       leave({ to: 'parts' });
-      onDeleted(t.name);
     },
     () => setReloads((n) => n + 1),
   );
@@ -123,10 +121,11 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
         </h1>
         {dirty ? <UnsavedBadge testId="unsaved" /> : null}
       </div>
-      {status ? (
+      {status?.kind === 'problem' ? (
         <EditorStatus
           status={status}
           summary={summary}
+          nameOf={fieldName}
           onDismiss={() => setStatus(null)}
           onReload={() => {
             setStatus(null);
@@ -146,6 +145,8 @@ export function PartEditor({ target, navigate, leave, onDeleted }: Props): React
             {form.kind === 'plug' ? <PlugSections {...props} /> : null}
           </div>
           <div className="form-actions">
+            {/* After a save the note sits by the save button, where the person is looking, and takes focus. */}
+            {status?.kind === 'done' ? <EditorStatus status={status} summary={{}} onDismiss={() => setStatus(null)} takeFocus className="tag-by-save" /> : null}
             <button type="submit" className="primary" disabled={saving}>
               {saving ? 'Saving…' : 'Save the part'}
             </button>

@@ -10,11 +10,15 @@ import { numberToText, parseNumberText } from '../../app/numbers.js';
 import type { GapUnit } from '../../app/units.js';
 import { gapFromMm, gapPrint, regap, type GapValue } from '../../app/gaps.js';
 import { fieldSpecs, plainMessage, toStored, toTyped } from './field-specs.js';
+import { checkInOnePass } from '../../app/one-pass.js';
+import type { z } from 'zod';
 
 export type PartForm = {
   kind: PartKind;
   name: string;
   notes: string;
+  /** How many are on the shelf, as typed. */
+  quantity: string;
   coil: {
     primaryResistanceOhm20C: string;
     primaryInductanceH: string; // typed in mH
@@ -61,6 +65,7 @@ export function blankPartForm(kind: PartKind): PartForm {
     kind,
     name: '',
     notes: '',
+    quantity: '1',
     coil: { primaryResistanceOhm20C: '', primaryInductanceH: '', secondaryResistanceOhm: '', turnsRatio: '', secondaryInductanceH: '', forBallast: false, ratedVoltageV: '12', maxDissipationW: '', ratedSecondaryKv: '', couplingK: '' },
     ballast: { ballastType: 'ceramic', coldResistanceOhm: '', thermalResistanceKPerW: '' },
     module: {
@@ -98,6 +103,7 @@ export function partToForm(p: Part, unit: GapUnit): PartForm {
   const f = blankPartForm(p.kind);
   f.name = p.name;
   f.notes = p.notes;
+  f.quantity = String(p.quantity);
   switch (p.kind) {
     case 'coil':
       f.coil = {
@@ -164,126 +170,129 @@ export type FormCheck = { ok: true; input: PartInput } | { ok: false; errors: Re
 
 /** Reads the chosen kind's fields and checks them exactly as the store will. */
 export function formToInput(f: PartForm, unit: GapUnit): FormCheck {
-  const errors: Record<string, string> = {};
+  const own: Record<string, string> = {};
   const label = (path: string): string => fieldSpecs[path]?.label ?? 'This value';
-  const num = (path: string, text: string): number => {
-    const p = parseNumberText(text, label(path));
-    if (!p.ok) {
-      errors[path] = p.message;
-      return Number.NaN; // never sent: the message above stops the save
+  // Read twice when a box is unreadable (app/one-pass.ts), so the cross-field checks still run.
+  const build = (standIn: number): unknown => {
+    const num = (path: string, text: string): number => {
+      const p = parseNumberText(text, label(path));
+      if (!p.ok) {
+        own[path] = p.message;
+        return standIn; // never sent: the message above stops the save
+      }
+      const spec = fieldSpecs[path];
+      return spec ? toStored(spec, p.value) : p.value;
+    };
+    const opt = (path: string, text: string): number | null => (text.trim() === '' ? null : num(path, text));
+    const gap = (path: string, g: GapValue): number => {
+      if (g.mm !== null) return g.mm;
+      const p = parseNumberText(g.text, label(path));
+      own[path] = p.ok ? `${label(path)} could not be read.` : p.message;
+      return standIn;
+    };
+    const base = { name: f.name, notes: f.notes, quantity: num('quantity', f.quantity) };
+    let candidate: unknown;
+    switch (f.kind) {
+      case 'coil': {
+        const c = f.coil;
+        candidate = {
+          kind: 'coil',
+          ...base,
+          primaryResistanceOhm20C: num('primaryResistanceOhm20C', c.primaryResistanceOhm20C),
+          primaryInductanceH: num('primaryInductanceH', c.primaryInductanceH),
+          secondaryResistanceOhm: num('secondaryResistanceOhm', c.secondaryResistanceOhm),
+          turnsRatio: opt('turnsRatio', c.turnsRatio),
+          secondaryInductanceH: opt('secondaryInductanceH', c.secondaryInductanceH),
+          forBallast: c.forBallast,
+          ratedVoltageV: c.ratedVoltageV === '6' ? 6 : 12,
+          maxDissipationW: opt('maxDissipationW', c.maxDissipationW),
+          ratedSecondaryKv: opt('ratedSecondaryKv', c.ratedSecondaryKv),
+          couplingK: opt('couplingK', c.couplingK),
+        };
+        break;
+      }
+      case 'ballast': {
+        const b = f.ballast;
+        candidate = {
+          kind: 'ballast',
+          ...base,
+          ballastType: b.ballastType,
+          coldResistanceOhm: num('coldResistanceOhm', b.coldResistanceOhm),
+          thermalResistanceKPerW: opt('thermalResistanceKPerW', b.thermalResistanceKPerW),
+        };
+        break;
+      }
+      case 'module': {
+        const m = f.module;
+        const t = m.moduleType;
+        // Fields that belong to another type of module are not sent; the ones this type needs are
+        // read as required, so a blank gets "is needed" beside the box rather than a general refusal.
+        candidate = {
+          kind: 'module',
+          ...base,
+          moduleType: t,
+          supplyMinV: num('supplyMinV', m.supplyMinV),
+          supplyMaxV: num('supplyMaxV', m.supplyMaxV),
+          earthPolarities: [...(m.earthNegative ? ['negative'] : []), ...(m.earthPositive ? ['positive'] : [])],
+          minCoilResistanceOhm: num('minCoilResistanceOhm', m.minCoilResistanceOhm),
+          maxCurrentA: num('maxCurrentA', m.maxCurrentA),
+          currentLimitA: t === 'breakerless-current-limited' ? num('currentLimitA', m.currentLimitA) : null,
+          switchSaturationV: num('switchSaturationV', m.switchSaturationV),
+          primaryClampV: opt('primaryClampV', m.primaryClampV),
+          fixedDutyFraction: t === 'breakerless-fixed-duty' ? num('fixedDutyFraction', m.fixedDutyFraction) : null,
+          maxDutyFraction: t === 'breakerless-current-limited' ? num('maxDutyFraction', m.maxDutyFraction) : null,
+          stallShutOff: m.stallShutOff,
+          maxSparkRateHz: num('maxSparkRateHz', m.maxSparkRateHz),
+          tachOutput: m.tachOutput,
+          needsSuppressedLeads: m.needsSuppressedLeads,
+          cd:
+            t === 'capacitive-discharge'
+              ? {
+                  capacitorUf: num('cd.capacitorUf', m.cd.capacitorUf),
+                  chargeVoltageV: num('cd.chargeVoltageV', m.cd.chargeVoltageV),
+                  chargerPowerW: num('cd.chargerPowerW', m.cd.chargerPowerW),
+                  multiSparkBelowRpm: opt('cd.multiSparkBelowRpm', m.cd.multiSparkBelowRpm),
+                }
+              : null,
+        };
+        break;
+      }
+      case 'tach':
+        candidate = { kind: 'tach', ...base, senses: f.tach.senses };
+        break;
+      case 'leads':
+        candidate = { kind: 'leads', ...base, core: f.leads.core, resistancePerLeadOhm: num('resistancePerLeadOhm', f.leads.resistancePerLeadOhm) };
+        break;
+      case 'plug': {
+        const p = f.plug;
+        candidate = {
+          kind: 'plug',
+          ...base,
+          resistor: p.resistor,
+          // A plug without a resistor has none: 0 ohm, not a figure left over from before.
+          resistorOhm: p.resistor ? num('resistorOhm', p.resistorOhm) : 0,
+          gapMinMm: gap('gapMinMm', p.gapMin),
+          gapMaxMm: gap('gapMaxMm', p.gapMax),
+        };
+        break;
+      }
     }
-    const spec = fieldSpecs[path];
-    return spec ? toStored(spec, p.value) : p.value;
+    return candidate;
   };
-  const opt = (path: string, text: string): number | null => (text.trim() === '' ? null : num(path, text));
-  const gap = (path: string, g: GapValue): number => {
-    if (g.mm !== null) return g.mm;
-    const p = parseNumberText(g.text, label(path));
-    errors[path] = p.ok ? `${label(path)} could not be read.` : p.message;
-    return Number.NaN;
-  };
-  const base = { name: f.name, notes: f.notes };
-  let candidate: unknown;
-  switch (f.kind) {
-    case 'coil': {
-      const c = f.coil;
-      candidate = {
-        kind: 'coil',
-        ...base,
-        primaryResistanceOhm20C: num('primaryResistanceOhm20C', c.primaryResistanceOhm20C),
-        primaryInductanceH: num('primaryInductanceH', c.primaryInductanceH),
-        secondaryResistanceOhm: num('secondaryResistanceOhm', c.secondaryResistanceOhm),
-        turnsRatio: opt('turnsRatio', c.turnsRatio),
-        secondaryInductanceH: opt('secondaryInductanceH', c.secondaryInductanceH),
-        forBallast: c.forBallast,
-        ratedVoltageV: c.ratedVoltageV === '6' ? 6 : 12,
-        maxDissipationW: opt('maxDissipationW', c.maxDissipationW),
-        ratedSecondaryKv: opt('ratedSecondaryKv', c.ratedSecondaryKv),
-        couplingK: opt('couplingK', c.couplingK),
-      };
-      break;
-    }
-    case 'ballast': {
-      const b = f.ballast;
-      candidate = {
-        kind: 'ballast',
-        ...base,
-        ballastType: b.ballastType,
-        coldResistanceOhm: num('coldResistanceOhm', b.coldResistanceOhm),
-        thermalResistanceKPerW: opt('thermalResistanceKPerW', b.thermalResistanceKPerW),
-      };
-      break;
-    }
-    case 'module': {
-      const m = f.module;
-      const t = m.moduleType;
-      // Fields that belong to another type of module are not sent; the ones this type needs are
-      // read as required, so a blank gets "is needed" beside the box rather than a general refusal.
-      candidate = {
-        kind: 'module',
-        ...base,
-        moduleType: t,
-        supplyMinV: num('supplyMinV', m.supplyMinV),
-        supplyMaxV: num('supplyMaxV', m.supplyMaxV),
-        earthPolarities: [...(m.earthNegative ? ['negative'] : []), ...(m.earthPositive ? ['positive'] : [])],
-        minCoilResistanceOhm: num('minCoilResistanceOhm', m.minCoilResistanceOhm),
-        maxCurrentA: num('maxCurrentA', m.maxCurrentA),
-        currentLimitA: t === 'breakerless-current-limited' ? num('currentLimitA', m.currentLimitA) : null,
-        switchSaturationV: num('switchSaturationV', m.switchSaturationV),
-        primaryClampV: opt('primaryClampV', m.primaryClampV),
-        fixedDutyFraction: t === 'breakerless-fixed-duty' ? num('fixedDutyFraction', m.fixedDutyFraction) : null,
-        maxDutyFraction: t === 'breakerless-current-limited' ? num('maxDutyFraction', m.maxDutyFraction) : null,
-        stallShutOff: m.stallShutOff,
-        maxSparkRateHz: num('maxSparkRateHz', m.maxSparkRateHz),
-        tachOutput: m.tachOutput,
-        needsSuppressedLeads: m.needsSuppressedLeads,
-        cd:
-          t === 'capacitive-discharge'
-            ? {
-                capacitorUf: num('cd.capacitorUf', m.cd.capacitorUf),
-                chargeVoltageV: num('cd.chargeVoltageV', m.cd.chargeVoltageV),
-                chargerPowerW: num('cd.chargerPowerW', m.cd.chargerPowerW),
-                multiSparkBelowRpm: opt('cd.multiSparkBelowRpm', m.cd.multiSparkBelowRpm),
-              }
-            : null,
-      };
-      break;
-    }
-    case 'tach':
-      candidate = { kind: 'tach', ...base, senses: f.tach.senses };
-      break;
-    case 'leads':
-      candidate = { kind: 'leads', ...base, core: f.leads.core, resistancePerLeadOhm: num('resistancePerLeadOhm', f.leads.resistancePerLeadOhm) };
-      break;
-    case 'plug': {
-      const p = f.plug;
-      candidate = {
-        kind: 'plug',
-        ...base,
-        resistor: p.resistor,
-        // A plug without a resistor has none: 0 ohm, not a figure left over from before.
-        resistorOhm: p.resistor ? num('resistorOhm', p.resistorOhm) : 0,
-        gapMinMm: gap('gapMinMm', p.gapMin),
-        gapMaxMm: gap('gapMaxMm', p.gapMax),
-      };
-      break;
-    }
-  }
-  const parsed = partInput.safeParse(candidate);
-  if (parsed.success && Object.keys(errors).length === 0) return { ok: true, input: parsed.data };
-  const fromSchema: Record<string, string> = {};
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
+  const toMessages = (error: z.ZodError): Record<string, string> => {
+    const out: Record<string, string> = {};
+    for (const issue of error.issues) {
       const key = issue.path.map(String).join('.') || '_';
-      if (!(key in fromSchema)) fromSchema[key] = plainMessage(issue, unit);
+      if (!(key in out)) out[key] = plainMessage(issue, unit);
     }
-  }
-  // Our own "type a number" messages win over zod's, which only sees the NaN put in their place.
-  return { ok: false, errors: { ...fromSchema, ...errors } };
+    return out;
+  };
+  // Our own "type a number" messages win over zod's, which only sees the stand-in.
+  return checkInOnePass(partInput, build, own, toMessages);
 }
 
 /** "Has anything changed?": only the chosen kind's fields count, and gaps by their millimetres. */
 export function formFingerprint(f: PartForm): string {
   const own = f.kind === 'plug' ? { ...f.plug, gapMin: gapPrint(f.plug.gapMin), gapMax: gapPrint(f.plug.gapMax) } : f[f.kind];
-  return JSON.stringify({ kind: f.kind, name: f.name, notes: f.notes, own });
+  return JSON.stringify({ kind: f.kind, name: f.name, notes: f.notes, quantity: f.quantity, own });
 }

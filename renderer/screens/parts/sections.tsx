@@ -9,6 +9,7 @@ import { Group } from '../../app/Group.js';
 import { unitLabel, type GapUnit } from '../../app/units.js';
 import type { PartForm } from './form-model.js';
 import { ballastTypeChoices, coreChoices, kindChoices, moduleTypeChoices, ratedVoltageChoices, sensesChoices } from './labels.js';
+import { NoticeMark } from '../../app/Notice.js';
 
 export type Update = (fn: (f: PartForm) => PartForm) => void;
 type Props = { form: PartForm; update: Update; unit: GapUnit };
@@ -30,6 +31,7 @@ export function IdentitySection({ form, update, kindLocked }: Props & { kindLock
         {...(kindLocked ? { hint: kindLocked } : {})}
       />
       <TextField path="name" label="Name" value={form.name} onChange={(v) => update((f) => ({ ...f, name: v }))} placeholder="What it says on the part, in your words" />
+      <TextField path="quantity" label="How many you have" numeric value={form.quantity} onChange={(v) => update((f) => ({ ...f, quantity: v }))} hint="On the shelf or fitted; one module cannot go into two plans you mark as fitted" />
       <NotesField path="notes" label="Notes" value={form.notes} onChange={(v) => update((f) => ({ ...f, notes: v }))} />
     </Group>
   );
@@ -112,7 +114,7 @@ function EarthBoxes({ form, update }: Omit<Props, 'unit'>): ReactNode {
       </label>
       {message ? (
         <span className="field-error" id="e-earthPolarities" data-testid="error-earthPolarities">
-          <span aria-hidden="true" className="icon">!</span> {message}
+          <NoticeMark kind="problem" />{message}
         </span>
       ) : null}
     </fieldset>

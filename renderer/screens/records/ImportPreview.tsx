@@ -1,6 +1,7 @@
 /** What an import will do (or did): counts, then each record with its outcome in words. */
 import type { ReactNode } from 'react';
 import type { ImportSummaryView } from '../../../electron/ipc/channels.js';
+import { Notice } from '../../app/Notice.js';
 
 const outcomeWords = { added: 'will be added', skipped: 'is already here (skipped)', renamed: 'differs from the one here: added as' } as const;
 
@@ -27,22 +28,17 @@ export function ImportPreview({ summary, testId }: { summary: ImportSummaryView;
 /** Every problem of a refused file, one line each, `where: why`. */
 export function ProblemList({ message, fields, testId }: { message: string; fields?: Record<string, string> | undefined; testId: string }): ReactNode {
   return (
-    <div className="notice notice-problem" role="alert" data-testid={testId}>
-      <span className="notice-icon icon-problem" aria-hidden="true">
-        !
-      </span>
-      <div className="notice-text">
-        <strong>Problem:</strong> {message}
-        {fields && Object.keys(fields).length > 0 ? (
-          <ul>
-            {Object.entries(fields).map(([where, why]) => (
-              <li key={where}>
-                {where}: {why}
-              </li>
-            ))}
-          </ul>
-        ) : null}
-      </div>
-    </div>
+    <Notice kind="problem" testId={testId}>
+      {message}
+      {fields && Object.keys(fields).length > 0 ? (
+        <ul className="file-problems">
+          {Object.entries(fields).map(([where, why]) => (
+            <li key={where}>
+              <strong>{where}</strong>: {why}
+            </li>
+          ))}
+        </ul>
+      ) : null}
+    </Notice>
   );
 }

@@ -4,6 +4,7 @@
  * or delete one (delete asks first). A failed save keeps every character typed and shows the
  * store's message beside its field.
  */
+import type { Removal } from '../../app/removal.js';
 import { useEffect, useState, type ReactNode } from 'react';
 import { fieldMessages, readingInput, type Reading } from '../../../db/schema.js';
 import { call } from '../../app/bridge.js';
@@ -14,6 +15,7 @@ import { BandMark } from '../../sheet/Marks.js';
 import type { Band, SheetStep } from '../../sheet/model.js';
 import { todayText } from '../../app/today.js';
 import { unitChoices } from './units.js';
+import { NoticeMark } from '../../app/Notice.js';
 
 type Form = { value: string; unit: string; takenOn: string; note: string };
 type Props = {
@@ -23,12 +25,14 @@ type Props = {
   readings: readonly Reading[];
   bands: ReadonlyMap<number, Band>;
   onSaved: (what: string) => void;
+  /** A reading was deleted: the sentence and the token that undoes it. */
+  onRemoved: (r: Removal) => void;
   onDirty: (key: string, dirty: boolean) => void;
 };
 
 const safeId = (key: string): string => key.replace(/[^a-zA-Z0-9_-]/g, '-');
 
-export function ReadingEntry({ planId, step, readings, bands, onSaved, onDirty }: Props): ReactNode {
+export function ReadingEntry({ planId, step, readings, bands, onSaved, onRemoved, onDirty }: Props): ReactNode {
   const r = step.reading!;
   const units = unitChoices(r.unit);
   const blank = (): Form => ({ value: '', unit: units[0]!.value, takenOn: todayText(), note: '' });
@@ -93,7 +97,7 @@ export function ReadingEntry({ planId, step, readings, bands, onSaved, onDirty }
         setEditing(null);
         setForm(blank());
       }
-      onSaved(`Deleted the reading of ${valueText(x.value, x.unit)} taken on ${x.takenOn}.`);
+      onRemoved({ text: `Deleted the reading of ${valueText(x.value, x.unit)} taken on ${x.takenOn}.`, undoToken: res.value.undoToken });
     }
   };
 
@@ -103,7 +107,7 @@ export function ReadingEntry({ planId, step, readings, bands, onSaved, onDirty }
       {input}
       {errors[k] ? (
         <span className="field-error" id={`${id}-${k}-error`} data-testid={`reading-error-${step.key}-${k}`}>
-          <span aria-hidden="true" className="icon">!</span> {errors[k]}
+          <NoticeMark kind="problem" />{errors[k]}
         </span>
       ) : null}
     </div>
@@ -160,7 +164,7 @@ export function ReadingEntry({ planId, step, readings, bands, onSaved, onDirty }
       </form>
       {problem ? (
         <p className="field-error" role="alert" data-testid={`reading-problem-${step.key}`}>
-          <span aria-hidden="true" className="icon">!</span> Not saved: {problem}
+          <NoticeMark kind="problem" />Not saved: {problem}
         </p>
       ) : null}
       {readings.length > 0 ? (

@@ -12,12 +12,13 @@ import { call } from '../../app/bridge.js';
 import type { CurrentEngine } from '../../app/current-engine.js';
 import { Confirm } from '../../app/Dialog.js';
 import { useLeaveGuard } from '../../app/leave-guard.js';
-import { Notice, type NoticeKind } from '../../app/Notice.js';
+import { Notice, type NoticeKind, NoticeMark } from '../../app/Notice.js';
 import type { Navigate } from '../../app/routes.js';
 import { statusWords } from '../../sheet/format.js';
 import type { Band, JudgedReading, SheetStep } from '../../sheet/model.js';
 import { SheetDocument, type PageSize } from '../../sheet/SheetDocument.js';
 import { PrintBar } from '../../app/PrintBar.js';
+import { useRemovalNotice } from '../../app/removal.js';
 import { ReadingEntry } from './ReadingEntry.js';
 import { TickBox, TickError, type TickState } from './TickBox.js';
 import { useEngines, usePlans, useSheet } from './use-sheet-data.js';
@@ -48,6 +49,8 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
   const [drafts, setDrafts] = useState<ReadonlySet<string>>(new Set());
   const [ask, setAsk] = useState<{ then: () => void } | null>(null);
   const [flash, setFlash] = useState<{ kind: NoticeKind; text: string } | null>(null);
+  // A deleted reading's note with its Undo, here on the sheet (the frame's note is for engines and parts).
+  const removal = useRemovalNotice(() => setVersion((v) => v + 1));
   const [statusProblem, setStatusProblem] = useState<string | null>(null);
 
   useLeaveGuard(drafts.size > 0, 'A reading you typed on the wiring sheet');
@@ -242,6 +245,7 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
         </div>
       ) : null}
       {sheet.problem && sheet.for === planId ? <Notice kind="problem">{sheet.problem}</Notice> : null}
+      {removal.notice}
       {flash ? (
         <Notice kind={flash.kind} onDismiss={() => setFlash(null)} testId="sheet-flash">
           {flash.text}
@@ -263,7 +267,7 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
               </select>
               {statusProblem ? (
                 <span className="field-error" id="sheet-status-error">
-                  <span aria-hidden="true" className="icon">!</span> {statusProblem}
+                  <NoticeMark kind="problem" />{statusProblem}
                 </span>
               ) : null}
             </div>
@@ -298,6 +302,11 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
                 onDirty={onDirty}
                 onSaved={(what) => {
                   setFlash({ kind: 'done', text: what });
+                  setVersion((v) => v + 1);
+                }}
+                onRemoved={(r) => {
+                  setFlash(null);
+                  removal.announce(r);
                   setVersion((v) => v + 1);
                 }}
               />

@@ -4,6 +4,7 @@
  * beside it (ticking again tries again).
  */
 import type { ReactNode } from 'react';
+import { NoticeMark } from '../../app/Notice.js';
 
 export type TickState = { want: boolean; saving: boolean; error: string | null };
 
@@ -12,7 +13,7 @@ export function TickError({ stepKey, pending }: { stepKey: string; pending: Tick
   if (!pending?.error) return null;
   return (
     <p className="field-error tick-error" id={tickErrorId(stepKey)} role="alert" data-testid={`tick-error-${stepKey}`}>
-      <span aria-hidden="true" className="icon">!</span> The tick was not saved ({pending.want ? 'ticked' : 'unticked'} here, not in the workshop): {pending.error} Tick the box again to retry.
+      <NoticeMark kind="problem" />The tick was not saved ({pending.want ? 'ticked' : 'unticked'} here, not in the workshop): {pending.error} Tick the box again to retry.
     </p>
   );
 }

@@ -8,6 +8,7 @@ import { useState, type FormEvent, type ReactNode } from 'react';
 import { conditionByKey, conditionOverrides, conditionText, type Engine } from '../../../db/schema.js';
 import { call } from '../../app/bridge.js';
 import { parseOptionalNumberText } from '../../app/numbers.js';
+import { NoticeMark } from '../../app/Notice.js';
 
 type Props = {
   engine: Engine;
@@ -84,9 +85,7 @@ export function AmbientField({ engine, onSaved }: Props): ReactNode {
         {message ? (
           <span id="weigh-ambient-note" className={message.kind === 'problem' ? 'field-error' : 'hint'} data-testid="ambient-message" role={message.kind === 'problem' ? 'alert' : 'status'}>
             {message.kind === 'problem' ? (
-              <span aria-hidden="true" className="icon">
-                !
-              </span>
+              <NoticeMark kind="problem" />
             ) : null}{' '}
             {message.text}
           </span>

@@ -6,11 +6,11 @@
 import { useContext, useEffect, useMemo, useRef, useState, type FormEvent, type ReactNode } from 'react';
 import type { Engine, Part, PartKind, Plan, PlanStatus } from '../../../db/schema.js';
 import { call } from '../../app/bridge.js';
-import { UnsavedBadge } from '../../app/EditorStatus.js';
+import { FixList, UnsavedBadge } from '../../app/EditorStatus.js';
 import { CheckField, FieldErrorsContext, fieldId, NotesField, SelectField, TextField } from '../../app/fields.js';
 import { useFormSave } from '../../app/form-save.js';
 import { gapFromText, regap } from '../../app/gaps.js';
-import { Notice } from '../../app/Notice.js';
+import { Notice, NoticeMark } from '../../app/Notice.js';
 import { unitLabel, useGapUnit } from '../../app/units.js';
 import { formToPlanInput, planFingerprint, type PlanForm } from './plan-form.js';
 import { feedChoices } from './words.js';
@@ -63,7 +63,7 @@ export function PlanEditor({ engine, parts, initial, planId, updatedAt, status, 
 
   const check = useMemo(() => formToPlanInput(form, engine.id, status), [form, engine.id, status]);
   const clientErrors = check.ok ? {} : check.errors;
-  const { errorsCtx, submitted, serverErrors, saving, save: saveForm } = useFormSave(clientErrors, headingRef, fieldOrder);
+  const { errorsCtx, submitted, serverErrors, saving, save: saveForm, fieldName } = useFormSave(clientErrors, headingRef, fieldOrder);
 
   const set = (patch: Partial<PlanForm>): void => setForm((f) => ({ ...f, ...patch }));
   const text = (key: 'name' | 'notes' | 'moduleId' | 'coilId' | 'tachId' | 'leadsId' | 'plugId') => (v: string) => set({ [key]: v } as Partial<PlanForm>);
@@ -107,23 +107,14 @@ export function PlanEditor({ engine, parts, initial, planId, updatedAt, status, 
         {dirty ? <UnsavedBadge testId="plan-unsaved" /> : null}
       </div>
       {problem ? (
-        <Notice kind="problem" onDismiss={() => setProblem(null)} testId="plan-status">
+        <Notice
+          kind="problem"
+          onDismiss={() => setProblem(null)}
+          testId="plan-status"
+          action={stale && onReload ? { label: 'Close and reload the plans', onClick: onReload, testId: 'reload-record' } : undefined}
+        >
           {problem}
-          {stale ? (
-            <>
-              {' '}
-              <button type="button" onClick={onReload} data-testid="reload-record">
-                Close and reload the plans
-              </button>
-            </>
-          ) : null}
-          {Object.keys(summary).length > 0 ? (
-            <ul className="error-summary">
-              {Object.entries(summary).map(([path, message]) => (
-                <li key={path}>{message}</li>
-              ))}
-            </ul>
-          ) : null}
+          <FixList messages={summary} nameOf={fieldName} />
         </Notice>
       ) : null}
       <FieldErrorsContext.Provider value={errorsCtx}>
@@ -204,7 +195,7 @@ function FeedChoice({ value, onChange, noBallast }: { value: PlanForm['moduleFee
       {noBallast ? <span className="hint">With no ballast in the plan, both are the same wire.</span> : null}
       {message ? (
         <span className="field-error" data-testid="error-moduleFeed">
-          <span aria-hidden="true" className="icon">!</span> {message}
+          <NoticeMark kind="problem" />{message}
         </span>
       ) : null}
     </fieldset>

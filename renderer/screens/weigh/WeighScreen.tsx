@@ -14,11 +14,14 @@ import { Notice, type NoticeKind } from '../../app/Notice.js';
 import { PrintBar } from '../../app/PrintBar.js';
 import type { PageSize } from '../../sheet/SheetDocument.js';
 import type { Navigate } from '../../app/routes.js';
+import { saveSettings, settingsNow } from '../../app/settings.js';
 import { useGapUnit } from '../../app/units.js';
 import { Cautions } from './Cautions.js';
 import { KeyPointsTable } from './KeyPointsTable.js';
 import { blankPlanForm, planToForm, suggestionToForm, type PlanForm } from './plan-form.js';
 import { PlanEditor } from './PlanEditor.js';
+import { useRemovalNotice } from '../../app/removal.js';
+import { useDeletePlan } from './delete-plan.js';
 import { MAX_TICKED, PlanList } from './PlanList.js';
 import { RuleDetails, RuleOverview } from './RuleDetails.js';
 import { SetupCards } from './SetupCards.js';
@@ -39,6 +42,24 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
   const { engines, parts } = useEnginesAndParts();
   const [engineId, setEngineId] = useState<number | null>(current?.id ?? null);
   const [plansVersion, setPlansVersion] = useState(0);
+  // A deleted plan's note with its Undo; undoing reads the plans again.
+  const removal = useRemovalNotice(() => setPlansVersion((v) => v + 1));
+  const delPlan = useDeletePlan(
+    (id, r) => {
+      if (editor?.planId === id) {
+        setEditor(null);
+        setEditing({ dirty: false, name: '' });
+      }
+      setDone(null);
+      removal.announce(r);
+      setPlansVersion((v) => v + 1);
+    },
+    (message, code) => {
+      setDone(null);
+      removal.refused(message);
+      if (code === 'STALE' || code === 'NOT_FOUND') setPlansVersion((v) => v + 1);
+    },
+  );
   const { engine, plans, plansFor } = useEngine(engineId, plansVersion);
   const [ticked, setTicked] = useState<{ ids: number[]; for: number | null }>({ ids: [], for: null });
   const [editor, setEditor] = useState<EditorState | null>(null);
@@ -67,14 +88,27 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
     if (e && e.id === engineId && current?.id !== e.id) onEngineChosen({ id: e.id, name: e.name });
   }, [engine.value]);
 
-  // A newly shown engine starts with its first plans ticked; after a save, ticks that still name a plan stay.
+  // A newly shown engine starts with the plans ticked when it was last weighed (kept per engine in
+  // the settings), or else its first plans; after a save, ticks that still name a plan stay.
   useEffect(() => {
     if (plansFor !== engineId || engineId === null) return;
     setTicked((t) => {
       if (t.for === engineId) return { ids: t.ids.filter((id) => plans.some((p) => p.id === id)), for: engineId };
+      const remembered = settingsNow().weighTicks[String(engineId)];
+      if (remembered) return { ids: remembered.filter((id) => plans.some((p) => p.id === id)).slice(0, MAX_TICKED), for: engineId };
       return { ids: plans.slice(0, MAX_TICKED).map((p) => p.id), for: engineId };
     });
   }, [plans, plansFor, engineId]);
+
+  // The ticks are remembered for the engine, so a reload or the next start weighs the same plans.
+  useEffect(() => {
+    if (ticked.for === null || ticked.for !== engineId || plansFor !== engineId) return;
+    const key = String(ticked.for);
+    const stored = settingsNow().weighTicks;
+    const before = stored[key];
+    if (before && before.length === ticked.ids.length && before.every((id, i) => id === ticked.ids[i])) return;
+    void saveSettings({ weighTicks: { ...stored, [key]: ticked.ids } });
+  }, [ticked, plansFor, engineId]);
 
   /** Runs `then` at once, or after asking when a plan has unsaved changes. */
   const guarded = (then: () => void): void => {
@@ -159,6 +193,7 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
         </div>
       ) : null}
       {engine.problem ? <Notice kind="problem">{engine.problem}</Notice> : null}
+      {removal.notice}
       {done ? (
         <Notice kind="done" onDismiss={() => setDone(null)} testId="weigh-done">
           {done}
@@ -173,6 +208,7 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
             ticked={ticked.ids}
             onTick={(id, on) => setTicked((t) => ({ ids: on ? (t.ids.includes(id) || t.ids.length >= MAX_TICKED ? t.ids : [...t.ids, id]) : t.ids.filter((x) => x !== id), for: t.for }))}
             onEdit={editPlan}
+            onDelete={delPlan.ask}
             onNew={newPlan}
             onOpenSheet={(p) => navigate({ to: 'sheet', planId: p.id })}
             editingId={editor ? (editor.planId ?? 'new') : null}
@@ -277,6 +313,7 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
           <p>{editing.name ? `The plan “${editing.name}”` : 'The new plan'} has changes that are not saved. Going on throws them away.</p>
         </Confirm>
       ) : null}
+      {delPlan.dialog}
     </section>
   );
 }

@@ -1,8 +1,8 @@
 /** Plain words, units and number formats for the "weigh a combination" screen. */
 import { gapText, unitLabel, type GapUnit } from '../../app/units.js';
 
-/** Our own words for the verdicts (each also has an icon shape and a colour) and the plan statuses: one list, shared with the sheet. */
-export { statusWords, verdictIcons, verdictWords } from '../../sheet/format.js';
+/** Our own words for the verdicts (each also has its spark-gap mark and a colour) and the plan statuses: one list, shared with the sheet. */
+export { statusWords, verdictWords } from '../../sheet/format.js';
 
 /** The two places a module can take its own supply, in plain words. */
 export const feedChoices = [
