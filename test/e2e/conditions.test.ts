@@ -20,9 +20,18 @@ describe('working conditions', () => {
     await page.getByLabel('Engine', { exact: true }).selectOption({ label: SALOON });
     await page.getByTestId('setup-card-1').waitFor();
 
+    // The order the page asks in: the comparison first, then the shelf (searched again once the
+    // comparison has answered, so the charts come back first).
+    const asked: string[] = [];
+    page.on('request', (r) => {
+      if (!r.url().endsWith('/api/invoke')) return;
+      const channel = (JSON.parse(r.postData() ?? '{}') as { channel?: string }).channel;
+      if (channel === 'check.plans' || channel === 'check.search') asked.push(channel);
+    });
     await page.getByLabel('Ambient air (°C)').fill('-18');
     await page.getByRole('button', { name: 'Weigh at this temperature' }).click();
     await expect.poll(() => page.getByTestId('ambient-message').innerText()).toContain('weighing again');
+    await expect.poll(() => asked).toEqual(['check.plans', 'check.search']);
     const stored = await api<StoredEngine>(host, 'engines.get', { id: saloon.id });
     expect(stored.conditions.ambientC).toBe(-18);
     const plans = await api<Array<{ id: number }>>(host, 'plans.list', { engineId: saloon.id });

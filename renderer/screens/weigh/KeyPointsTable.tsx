@@ -3,7 +3,7 @@
  * the energy stored and the energy the spark delivers with how long it lasts (what compares kinds
  * fairly, Heywood 1988, ch. 9), the voltages, and the cylinder state and ballast temperature there.
  */
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import type { ShownPoint, ShownSetup } from '../../../electron/ipc/channels.js';
 import { useGapUnit } from '../../app/units.js';
 import { perSpeedFigure, perSpeedKinds, type SpeedKey } from './SetupFigures.js';
@@ -27,7 +27,7 @@ const rows: Array<{ label: string; text: (p: ShownPoint) => string }> = [
   { label: 'Coil current when it fires', text: (p) => (p.currentA > 0 ? `${number(p.currentA, 2)} A` : '— (none: capacitor)') },
 ];
 
-export function KeyPointsTable({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
+export const KeyPointsTable = memo(function KeyPointsTable({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
   const [unit] = useGapUnit();
   const first = setups[0];
   if (!first) return null;
@@ -97,4 +97,4 @@ export function KeyPointsTable({ setups, margin }: { setups: readonly ShownSetup
       ))}
     </table>
   );
-}
+});

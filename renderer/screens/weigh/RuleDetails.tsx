@@ -3,7 +3,7 @@
  * what each check found, with its figures, why it matters and what to do. Checks that need
  * attention are open; the ones that came out fine are folded away but one click off.
  */
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import type { ShownRule, ShownSetup } from '../../../electron/ipc/channels.js';
 import { useGapUnit } from '../../app/units.js';
 import { VerdictBadge } from './Verdict.js';
@@ -12,7 +12,7 @@ import { figureName, figureText } from './words.js';
 const setupName = (s: ShownSetup): string => (s.kind === 'existing' ? 'Fitted now' : s.name);
 const rank = { fail: 0, caution: 1, pass: 2 } as const;
 
-export function RuleOverview({ setups }: { setups: readonly ShownSetup[] }): ReactNode {
+export const RuleOverview = memo(function RuleOverview({ setups }: { setups: readonly ShownSetup[] }): ReactNode {
   const first = setups[0];
   if (!first) return null;
   return (
@@ -40,7 +40,7 @@ export function RuleOverview({ setups }: { setups: readonly ShownSetup[] }): Rea
       </tbody>
     </table>
   );
-}
+});
 
 function RuleItem({ rule, testId, printCopy }: { rule: ShownRule; testId?: string; printCopy?: boolean }): ReactNode {
   const [unit] = useGapUnit();
@@ -70,7 +70,7 @@ function RuleItem({ rule, testId, printCopy }: { rule: ShownRule; testId?: strin
   );
 }
 
-export function RuleDetails({ setup, index }: { setup: ShownSetup; index: number }): ReactNode {
+export const RuleDetails = memo(function RuleDetails({ setup, index }: { setup: ShownSetup; index: number }): ReactNode {
   const sorted = [...setup.rules].sort((a, b) => rank[a.verdict] - rank[b.verdict]);
   const attention = sorted.filter((r) => r.verdict !== 'pass');
   const fine = sorted.filter((r) => r.verdict === 'pass');
@@ -114,4 +114,4 @@ export function RuleDetails({ setup, index }: { setup: ShownSetup; index: number
       ) : null}
     </section>
   );
-}
+});

@@ -1,5 +1,5 @@
 /** One card per setup: its verdict, how many checks came out which way, what to do, the margin and the gap. */
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import type { ShownSetup } from '../../../electron/ipc/channels.js';
 import { styleFor } from '../../charts/palette.js';
 import { useGapUnit } from '../../app/units.js';
@@ -7,7 +7,7 @@ import { SetupFigures } from './SetupFigures.js';
 import { VerdictBadge, VerdictKey } from './Verdict.js';
 import { figureName, figureText, gapWithUnit, number, rpmText, verdictWords } from './words.js';
 
-export function SetupCards({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
+export const SetupCards = memo(function SetupCards({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
   const [unit] = useGapUnit();
   return (
     <>
@@ -75,4 +75,4 @@ export function SetupCards({ setups, margin }: { setups: readonly ShownSetup[]; 
       <VerdictKey />
     </>
   );
-}
+});

@@ -4,7 +4,7 @@
  * shown as a band. The ignition fitted now and each plan keep one style (colour, dash and marker)
  * on both charts and on the cards.
  */
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import type { ShownSetup } from '../../../electron/ipc/channels.js';
 import { LineChart, type ChartLine } from '../../charts/LineChart.js';
 import { requiredStyle, styleFor } from '../../charts/palette.js';
@@ -18,7 +18,7 @@ function same(a: readonly number[], b: readonly number[]): boolean {
   return a.every((v, i) => Math.abs(v - b[i]!) <= 0.005 * Math.max(Math.abs(v), Math.abs(b[i]!), 1e-9));
 }
 
-export function WeighCharts({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
+export const WeighCharts = memo(function WeighCharts({ setups, margin }: { setups: readonly ShownSetup[]; margin: number }): ReactNode {
   const first = setups[0];
   if (!first) return null;
   const x = first.series.rpm;
@@ -85,4 +85,4 @@ export function WeighCharts({ setups, margin }: { setups: readonly ShownSetup[];
       />
     </div>
   );
-}
+});

@@ -4,7 +4,7 @@
  * to do), and the best combinations the parts bin offers. Unsaved plan edits are never dropped
  * without asking, whether the person leaves the screen, picks another engine or opens another plan.
  */
-import { useEffect, useState, type ReactNode } from 'react';
+import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
 import type { Plan, PlanStatus } from '../../../db/schema.js';
 import type { ShelfSuggestion, ShownSetup } from '../../../electron/ipc/channels.js';
 import type { CurrentEngine } from '../../app/current-engine.js';
@@ -70,9 +70,20 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
   const [printed, setPrinted] = useState<{ kind: NoticeKind; text: string } | null>(null);
 
   const ready = plansFor === engineId && ticked.for === engineId;
-  const comparison = useComparison(engineId, ticked.ids, ready, plansVersion);
+  // A changed working condition weighs again without reading the plans again.
+  const [conditionsVersion, setConditionsVersion] = useState(0);
+  const comparison = useComparison(engineId, ticked.ids, ready, `${plansVersion}.${conditionsVersion}`);
   const [shelfVersion, setShelfVersion] = useState(0);
   const search = useShelfSearch(engineId, shelfVersion);
+  // After a changed working condition the shelf is searched again once the comparison has answered,
+  // so the two do not share the processor and the charts come back first. `undefined`: nothing due.
+  const shelfAfter = useRef<unknown>(undefined);
+  useEffect(() => {
+    if (shelfAfter.current === undefined || comparison.busy) return;
+    if (comparison.value === shelfAfter.current && comparison.problem === null) return;
+    shelfAfter.current = undefined;
+    setShelfVersion((v) => v + 1);
+  }, [comparison]);
   useLeaveGuard(editing.dirty, editing.name ? `The plan “${editing.name}”` : 'The new plan');
 
   // Without a remembered engine, or with one that is gone, start on the first in the list.
@@ -155,7 +166,9 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
     });
 
   const answer = comparison.value && comparison.value.engineId === engineId ? comparison.value : null;
-  const setups: ShownSetup[] = answer ? [answer.existing, ...answer.candidates] : [];
+  // The same array while the answer is the same, so the memoised charts and tables skip the renders
+  // that only the rest of the screen needs (a save, a notice, the shelf search running).
+  const setups: ShownSetup[] = useMemo(() => (answer ? [answer.existing, ...answer.candidates] : []), [answer]);
   const cautions = answer?.cautions ?? (search.value?.engineId === engineId ? search.value.cautions : []);
 
   return (
@@ -243,8 +256,8 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
               key={e.id}
               engine={e}
               onSaved={() => {
-                setPlansVersion((v) => v + 1);
-                setShelfVersion((v) => v + 1);
+                shelfAfter.current = comparison.value;
+                setConditionsVersion((v) => v + 1);
               }}
             />
             {printed ? (

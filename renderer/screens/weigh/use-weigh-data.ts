@@ -60,7 +60,7 @@ export function useEngine(engineId: number | null, version: number): { engine: L
 }
 
 /** The comparison of the engine's fitted ignition with the ticked plans. */
-export function useComparison(engineId: number | null, ticked: readonly number[], ready: boolean, version: number): Loaded<ComparisonAnswer> {
+export function useComparison(engineId: number | null, ticked: readonly number[], ready: boolean, version: string): Loaded<ComparisonAnswer> {
   const [state, setState] = useState<Loaded<ComparisonAnswer>>(start);
   const key = ticked.join(',');
   useEffect(() => {
