@@ -1,7 +1,8 @@
 /**
  * What the list screens (engines, parts) share: the list read from the store again whenever the
  * app's data version moves or after a delete, a late answer from a screen already left dropped,
- * the problem and "done" lines, and each row's Edit and Delete buttons.
+ * the problem line, and each row's Edit and Delete buttons. (What a delete did is said by the note
+ * with its Undo, app/removal.tsx.)
  */
 import { useEffect, useState, type ReactNode } from 'react';
 import type { ChannelName, RequestOf, ResponseOf } from '../../electron/ipc/channels.js';
@@ -11,7 +12,6 @@ import { Notice } from './Notice.js';
 export function useListScreen<C extends ChannelName>(channel: C, request: RequestOf<C>, version: number) {
   const [items, setItems] = useState<ResponseOf<C> | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
-  const [done, setDone] = useState<string | null>(null);
   const [reloads, setReloads] = useState(0);
 
   useEffect(() => {
@@ -28,30 +28,15 @@ export function useListScreen<C extends ChannelName>(channel: C, request: Reques
     };
   }, [version, reloads]);
 
-  return { items, setItems, problem, setProblem, done, setDone, reload: () => setReloads((n) => n + 1) };
+  return { items, setItems, problem, setProblem, reload: () => setReloads((n) => n + 1) };
 }
 
-export function ListNotices({ problem, done, onDismissProblem, onDismissDone, doneTestId }: {
-  problem: string | null;
-  done: string | null;
-  onDismissProblem: () => void;
-  onDismissDone: () => void;
-  doneTestId?: string;
-}): ReactNode {
-  return (
-    <>
-      {problem ? (
-        <Notice kind="problem" onDismiss={onDismissProblem}>
-          {problem}
-        </Notice>
-      ) : null}
-      {done ? (
-        <Notice kind="done" onDismiss={onDismissDone} testId={doneTestId}>
-          {done}
-        </Notice>
-      ) : null}
-    </>
-  );
+export function ListProblem({ problem, onDismiss }: { problem: string | null; onDismiss: () => void }): ReactNode {
+  return problem ? (
+    <Notice kind="problem" onDismiss={onDismiss}>
+      {problem}
+    </Notice>
+  ) : null;
 }
 
 /** The head of the buttons' column: named for a screen reader, empty on screen. */

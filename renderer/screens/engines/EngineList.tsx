@@ -1,13 +1,13 @@
 /** The engines in this workshop, with the facts a restorer picks one by, and add/open/delete. */
 import type { ReactNode } from 'react';
-import { ActionsHead, ListNotices, RowActions, useListScreen } from '../../app/list-screen.js';
+import { ActionsHead, ListProblem, RowActions, useListScreen } from '../../app/list-screen.js';
 import type { Navigate } from '../../app/routes.js';
 import { useDeleteEngine } from './delete-engine.js';
 import { earthWords } from './labels.js';
 import { FirstSteps } from './FirstSteps.js';
 
 export function EngineList({ navigate, version, onDeleted }: { navigate: Navigate; version: number; onDeleted: (id: number) => void }): ReactNode {
-  const { items: engines, setItems: setEngines, problem, setProblem, done, setDone, reload } = useListScreen('engines.list', {}, version);
+  const { items: engines, setItems: setEngines, problem, setProblem, reload } = useListScreen('engines.list', {}, version);
 
   const del = useDeleteEngine(
     (id) => {
@@ -34,7 +34,7 @@ export function EngineList({ navigate, version, onDeleted }: { navigate: Navigat
           Add an engine
         </button>
       </div>
-      <ListNotices problem={problem} done={done} onDismissProblem={() => setProblem(null)} onDismissDone={() => setDone(null)} />
+      <ListProblem problem={problem} onDismiss={() => setProblem(null)} />
       <FirstSteps engines={engines} navigate={navigate} />
       {engines === null && !problem ? <p className="quiet">Reading the workshop…</p> : null}
       {engines && engines.length === 0 ? (

@@ -4,7 +4,7 @@
  */
 import { useState, type ReactNode } from 'react';
 import { partKinds, type Part, type PartKind } from '../../../db/schema.js';
-import { ListNotices, useListScreen } from '../../app/list-screen.js';
+import { ListProblem, useListScreen } from '../../app/list-screen.js';
 import type { Navigate } from '../../app/routes.js';
 import { useGapUnit } from '../../app/units.js';
 import { useDeletePart } from './delete-part.js';
@@ -16,7 +16,7 @@ type Props = { navigate: Navigate; version: number };
 
 export function PartsList({ navigate, version }: Props): ReactNode {
   const [unit] = useGapUnit();
-  const { items: parts, setItems: setParts, problem, setProblem, done, setDone, reload } = useListScreen('parts.list', {}, version);
+  const { items: parts, setItems: setParts, problem, setProblem, reload } = useListScreen('parts.list', {}, version);
   const [shown, setShownState] = useState<Shown>(loadShown);
 
   const del = useDeletePart(
@@ -47,7 +47,7 @@ export function PartsList({ navigate, version }: Props): ReactNode {
           Add a part
         </button>
       </div>
-      <ListNotices problem={problem} done={done} onDismissProblem={() => setProblem(null)} onDismissDone={() => setDone(null)} doneTestId="parts-done" />
+      <ListProblem problem={problem} onDismiss={() => setProblem(null)} />
       <fieldset className="kind-filter">
         <legend>Show</legend>
         <label>
