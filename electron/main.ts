@@ -18,6 +18,7 @@ import { externalLinkVerdict, navigationVerdict, windowOpenVerdict } from './she
 import { menuTemplate, type MenuAction } from './shell/menu.js';
 import { APP_SCHEME, APP_SCHEME_PRIVILEGES, APP_URL, appRequestVerdict } from './shell/app-protocol.js';
 import { CONTENT_SECURITY_POLICY_HEADER } from './shell/csp.js';
+import { pdfOptions } from './shell/print-options.js';
 import { registerChannels } from './shell/register.js';
 import { startupChoices } from './shell/startup-choices.js';
 import { isTrustedSender } from './shell/sender.js';
@@ -71,7 +72,7 @@ function openIfPlainWebLink(url: unknown): void {
  * are left off. Used by the File menu and by the screens' Print button (the 'app.print' channel).
  */
 async function printCurrentViewToPdf(win: BrowserWindow, pageSize: 'A4' | 'Letter'): Promise<{ saved: boolean; path: string | null }> {
-  const pdf = await win.webContents.printToPDF({ printBackground: false, pageSize, preferCSSPageSize: false });
+  const pdf = await win.webContents.printToPDF(pdfOptions(pageSize));
   const choice = await dialog.showSaveDialog(win, {
     title: 'Save this view as PDF',
     defaultPath: path.join(app.getPath('documents'), 'wiring-sheet.pdf'),

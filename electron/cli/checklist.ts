@@ -13,6 +13,8 @@ import { readJsonFile, guarded } from './commands.js';
 import { diagramSvg, sheetHtml } from './sheet-html.js';
 
 const formats = ['json', 'html'] as const;
+/** The paper the HTML sheet is laid out for: its named @page size (A4 by default). */
+const papers = ['a4', 'letter'] as const;
 
 /** The sheet in the command line's JSON shape (README, "Command line"): workshop units in `unit`. */
 export function sheetJson(sheet: Sheet): unknown {
@@ -50,17 +52,19 @@ export function sheetJson(sheet: Sheet): unknown {
 }
 
 export function checklistCommand(args: ParsedArgs): string {
-  onlyFlags(args, ['candidate', 'format', 'out']);
+  onlyFlags(args, ['candidate', 'format', 'out', 'paper']);
   const file = onePositional(args, 'plan file');
   const w = readPlanFile(readJsonFile(file));
   const format = choiceFlag(args, 'format', formats, 'json');
+  const paper = choiceFlag(args, 'paper', papers, 'a4');
+  if (format === 'json' && args.flags.has('paper')) throw new CliError('--paper: only the HTML sheet has pages; add --format html.');
   const out = args.flags.get('out');
   if (out === true || out === '') throw new CliError('--out: give the file to write, for example --out sheet.html.');
   if (w.plans.length === 0) throw new CliError('candidates: the plan file has no candidate; a wiring sheet is written for one candidate.');
   const index = intFlag(args, 'candidate', 1, 3, 1)!;
   if (index > w.plans.length) throw new CliError(`--candidate: ${index} names no candidate; the file has ${w.plans.length}.`);
   const sheet = guarded(() => buildSheet(sheetInput(w.engine, w.plans[index - 1]!, w.parts, [], localDate())));
-  const text = format === 'json' ? toJson(sheetJson(sheet)) : sheetHtml(sheet);
+  const text = format === 'json' ? toJson(sheetJson(sheet)) : sheetHtml(sheet, paper === 'letter' ? 'Letter' : 'A4');
   if (out === undefined) return text;
   try {
     writeFileSync(out, text);

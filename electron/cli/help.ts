@@ -12,11 +12,11 @@ Usage:
   npm run cli -- netlist <plan.json> --rpm R [--candidate N] [--scenario break|fouled|cd|charge] [--coupling K]
       Print an ngspice deck for one setup at R rpm: candidate N (1 to 3; 0 = the existing setup;
       default 1). Run it with: ngspice -b deck.cir
-  npm run cli -- checklist <plan.json> [--candidate N] [--format json|html] [--out FILE]
+  npm run cli -- checklist <plan.json> [--candidate N] [--format json|html] [--paper a4|letter] [--out FILE]
       Write the wiring sheet for candidate N (1 to 3, default 1): the cautions, the steps in order
       with the terminals, the expected readings with their bands and likely causes, and the wiring
-      diagram. --format html writes one printable page (styles inlined, no script). --out writes
-      to FILE instead of printing.
+      diagram. --format html writes one printable page (styles inlined, no script) laid out for
+      --paper (a4 or letter, default a4). --out writes to FILE instead of printing.
   npm run cli -- export --data-dir DIR [--out FILE]
       Print the whole workshop in DIR (every engine, part, plan, reading and sheet tick) as one
       workshop file (JSON, format "ignition-planner-workshop" version 1); --out writes it to FILE.

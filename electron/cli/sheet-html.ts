@@ -8,7 +8,7 @@ import { createElement } from 'react';
 import { renderToStaticMarkup } from 'react-dom/server';
 import type { Diagram, Sheet } from '../checklist/types.js';
 import { WiringDiagram } from '../../renderer/diagram/WiringDiagram.js';
-import { SheetDocument } from '../../renderer/sheet/SheetDocument.js';
+import { SheetDocument, type PageSize } from '../../renderer/sheet/SheetDocument.js';
 import { CliError } from './errors.js';
 
 /**
@@ -41,9 +41,12 @@ export function diagramSvg(diagram: Diagram): string {
   return figure.slice(start, end + '</svg>'.length);
 }
 
-/** The whole sheet as an HTML document: styles inlined, no script, the cautions before the first step. */
-export function sheetHtml(sheet: Sheet): string {
-  const body = renderToStaticMarkup(createElement(SheetDocument, { sheet, headingLevel: 1 }));
+/**
+ * The whole sheet as an HTML document: styles inlined, no script, the cautions before the first
+ * step, laid out for `pageSize` (the sheet's named @page: a browser's print takes that paper).
+ */
+export function sheetHtml(sheet: Sheet, pageSize: PageSize = 'A4'): string {
+  const body = renderToStaticMarkup(createElement(SheetDocument, { sheet, pageSize, headingLevel: 1 }));
   const title = `Wiring sheet: ${sheet.header.plan.name} (${sheet.header.engine.name})`;
   return `<!doctype html>
 <html lang="en">

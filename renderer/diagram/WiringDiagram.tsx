@@ -9,7 +9,7 @@ import type { ReactNode } from 'react';
 import { wireStyleOrder, wireStyles } from '../sheet/format.js';
 import type { Diagram, DiagramPart, DiagramTerminal, DiagramWire, WireStyle } from '../sheet/model.js';
 
-const INK = '#111111';
+const INK = '#000000';
 const PART_FONT = 13;
 const TERMINAL_FONT = 11;
 

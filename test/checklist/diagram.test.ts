@@ -4,8 +4,13 @@
  * boxes and inside the drawing; parts do not overlap; the DIN 72552 numbers are on the joints
  * (30, 31, 15, 15a, 1, 4); a plug per cylinder, top to bottom in the engine's firing order.
  */
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { buildSheet } from '../../electron/checklist/index.js';
+import { diagramSvg } from '../../electron/cli/sheet-html.js';
+import { WiringDiagram } from '../../renderer/diagram/WiringDiagram.js';
+import { wireStyleOrder, wireStyles } from '../../renderer/sheet/format.js';
 import type { Diagram, DiagramPart } from '../../electron/checklist/types.js';
 import { allCases } from './demo-sheets.js';
 
@@ -134,4 +139,94 @@ describe('the wiring diagram', () => {
     for (const p of sheet.diagram.parts) expect(p.y + p.height).toBeLessThanOrEqual(620);
     for (let i = 0; i < plugs.length; i++) for (let j = i + 1; j < plugs.length; j++) expect(overlaps(plugs[i]!, plugs[j]!)).toBe(false);
   });
+});
+
+/**
+ * Black and white: the drawing must read on a monochrome printer and to a colour-blind eye, so the
+ * kinds of wire are told apart by line alone and nothing is drawn in a colour or a grey.
+ *
+ * Told apart: two styles differ in being hollow, or in their dash pattern (solid, or a different
+ * number of dash entries, or a first dash at least sqrt 2 longer), or else in width by at least a
+ * factor of sqrt 2: the step between neighbouring line widths in ISO 128-20's series (0.25, 0.35,
+ * 0.5, 0.7, 1 mm; from memory), the smallest difference a drawing standard relies on.
+ *
+ * Colours: SVG 1.1, chapter 11 "Painting", paints with `fill` and `stroke` (and `color`,
+ * `stop-color`, `flood-color`, `lighting-color`); CSS colour keywords: black = #000000,
+ * white = #ffffff. Only those two, `none` and `currentColor` may appear, with no opacity (a
+ * half-opaque black prints grey) and no style attribute or element that could set another.
+ */
+describe('the wiring diagram in black and white', () => {
+  const SQRT2 = Math.SQRT2;
+  const dashes = (d: string): number[] => d.trim().split(/[\s,]+/).filter(Boolean).map(Number);
+  function apart(a: (typeof wireStyles)[keyof typeof wireStyles], b: (typeof wireStyles)[keyof typeof wireStyles]): string | null {
+    if (a.hollow !== b.hollow) return 'hollow';
+    const da = dashes(a.dash);
+    const db = dashes(b.dash);
+    if ((da.length === 0) !== (db.length === 0)) return 'solid against dashed';
+    if (da.length !== db.length) return 'dash pattern';
+    if (da.length > 0 && Math.max(da[0]!, db[0]!) / Math.min(da[0]!, db[0]!) >= SQRT2) return 'dash length';
+    if (Math.max(a.width, b.width) / Math.min(a.width, b.width) >= SQRT2) return 'width';
+    return null;
+  }
+
+  it('has a style for every kind of wire, each told apart from every other by line alone', () => {
+    expect([...wireStyleOrder].sort()).toEqual(Object.keys(wireStyles).sort());
+    for (const [i, x] of wireStyleOrder.entries()) {
+      const sx = wireStyles[x];
+      expect(sx.width, x).toBeGreaterThan(0);
+      for (const n of dashes(sx.dash)) expect(n, `${x} dash`).toBeGreaterThan(0);
+      for (const y of wireStyleOrder.slice(i + 1)) {
+        const sy = wireStyles[y];
+        // Never the same line twice, whatever the rule above says.
+        expect(`${sx.width}|${dashes(sx.dash).join(' ')}|${sx.hollow}`, `${x} against ${y}`).not.toBe(`${sy.width}|${dashes(sy.dash).join(' ')}|${sy.hollow}`);
+        expect(apart(sx, sy), `${x} against ${y}: ${sx.width}/${sx.dash || 'solid'}/${sx.hollow} and ${sy.width}/${sy.dash || 'solid'}/${sy.hollow}`).not.toBeNull();
+      }
+      // The legend names each line differently too.
+      for (const y of wireStyleOrder.slice(i + 1)) expect(sx.line, `${x} against ${y}`).not.toBe(wireStyles[y].line);
+    }
+  });
+
+  const allowed = new Set(['none', 'currentcolor', 'black', 'white', '#000', '#000000', '#fff', '#ffffff']);
+  function paintProblems(markup: string): string[] {
+    const out: string[] = [];
+    for (const m of markup.matchAll(/\s(fill|stroke|color|stop-color|flood-color|lighting-color)="([^"]*)"/gi)) {
+      if (!allowed.has(m[2]!.trim().toLowerCase())) out.push(`${m[1]}="${m[2]}"`);
+    }
+    for (const m of markup.matchAll(/\s((?:fill-|stroke-)?opacity)="([^"]*)"/gi)) if (Number(m[2]) !== 1) out.push(`${m[1]}="${m[2]}"`);
+    if (/\sstyle="/i.test(markup)) out.push('a style attribute');
+    if (/<style/i.test(markup)) out.push('a style element');
+    if (/<(linearGradient|radialGradient|pattern|filter|image)\b/i.test(markup)) out.push('a gradient, pattern, filter or image');
+    return out;
+  }
+
+  for (const c of cases) {
+    it(`draws only in black and white, with each wire in its own style: ${c.label}`, () => {
+      const figure = renderToStaticMarkup(createElement(WiringDiagram, { diagram: c.sheet.diagram }));
+      const svg = diagramSvg(c.sheet.diagram);
+      expect(figure).toContain(svg);
+      expect(paintProblems(figure)).toEqual([]);
+      expect(paintProblems(svg)).toEqual([]);
+      // Something is drawn in black at all (the check above would pass on an empty drawing).
+      expect(svg).toMatch(/stroke="#000000"/);
+      // Each wire's line carries its style's width and dashes; a hollow wire is a black line with a narrower white core.
+      for (const w of c.sheet.diagram.wires) {
+        const s = wireStyles[w.style];
+        const group = new RegExp(`<g class="diagram-wire wire-${w.style}" data-wire="${w.id}"[^>]*>([\\s\\S]*?)</g>`).exec(svg);
+        expect(group, w.id).not.toBeNull();
+        const lines = [...group![1]!.matchAll(/<polyline[^>]*>/g)].map((m) => m[0]);
+        const attr = (tag: string, name: string): string | null => new RegExp(`\\s${name}="([^"]*)"`).exec(tag)?.[1] ?? null;
+        expect(attr(lines[0]!, 'stroke'), w.id).toBe('#000000');
+        expect(Number(attr(lines[0]!, 'stroke-width')), w.id).toBe(s.width);
+        expect(attr(lines[0]!, 'stroke-dasharray'), w.id).toBe(s.dash === '' ? null : s.dash);
+        if (s.hollow) {
+          expect(lines.length, w.id).toBe(2);
+          expect(attr(lines[1]!, 'stroke'), w.id).toBe('#ffffff');
+          const core = Number(attr(lines[1]!, 'stroke-width'));
+          // Two black edges of at least 1 unit each either side of a visible white core.
+          expect(core, w.id).toBeGreaterThanOrEqual(1);
+          expect((s.width - core) / 2, w.id).toBeGreaterThanOrEqual(1);
+        } else expect(lines.length, w.id).toBe(1);
+      }
+    });
+  }
 });

@@ -12,6 +12,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoPlans } from '../../db/demo/plans.js';
 import { demoEngines, demoPart, planFileOf } from './demo-plan.js';
 import { runCli, tempFile } from './run-cli.js';
+import { parseArgs } from '../../electron/cli/args.js';
+import { checklistCommand } from '../../electron/cli/checklist.js';
+import { CliError } from '../../electron/cli/errors.js';
 
 const units = ['V', 'A', 'ohm', 'kohm', 'deg', 'rpm', 'mm'];
 
@@ -90,6 +93,30 @@ describe('checklist --format json, every demo plan', () => {
     expect(runCli(['checklist', file, '--format', 'pdf']).stderr).toMatch(/^--format: use one of json, html, not "pdf"\./);
     expect(runCli(['checklist', file, '--colour', 'red']).code).toBe(2);
   });
+
+  it('refuses a paper it does not know, and a paper for the JSON (which has no pages): exit 2, --paper: why', () => {
+    const file = tempFile(planFileOf(demoPlans[0]!));
+    const bad = runCli(['checklist', file, '--format', 'html', '--paper', 'legal']);
+    expect(bad.code).toBe(2);
+    expect(bad.stdout).toBe('');
+    expect(bad.stderr).toMatch(/^--paper: use one of a4, letter, not "legal"\./);
+    // The same command in this process (a child process costs seconds): the same refusal, exit code 2.
+    const refusal = (args: string[]): CliError => {
+      try {
+        checklistCommand(parseArgs(args));
+      } catch (e) {
+        if (e instanceof CliError) return e;
+        throw e;
+      }
+      throw new Error(`not refused: ${args.join(' ')}`);
+    };
+    const bare = refusal(['checklist', file, '--format', 'html', '--paper']);
+    expect(bare.exitCode).toBe(2);
+    expect(bare.message).toMatch(/^--paper: use one of a4, letter\./);
+    const json = refusal(['checklist', file, '--paper', 'letter']);
+    expect(json.exitCode).toBe(2);
+    expect(json.message).toMatch(/^--paper: only the HTML sheet has pages/);
+  });
 });
 
 describe('checklist --format html', () => {
@@ -102,6 +129,38 @@ describe('checklist --format html', () => {
     });
   });
   afterAll(async () => browser?.close());
+
+  /**
+   * --paper: the page asks for its paper through CSS (a named @page with `size`), so a browser
+   * printing with the CSS page size gets Letter, 8.5 x 11 in = 612 x 792 pt (ANSI/ASME Y14.1), or
+   * A4, 210 x 297 mm = 595.28 x 841.89 pt (ISO 216; 1 in = 25.4 mm = 72 pt).
+   */
+  it('lays the page out for --paper letter, and for A4 by default', async () => {
+    const file = tempFile(planFileOf(demoPlans[0]!));
+    for (const [paper, klass, w, h] of [
+      ['letter', 'page-letter', (8.5 * 72).toFixed(0), (11 * 72).toFixed(0)],
+      [null, 'page-a4', ((210 / 25.4) * 72).toFixed(0), ((297 / 25.4) * 72).toFixed(0)],
+    ] as const) {
+      const html = join(dir, `sheet-paper-${paper ?? 'default'}.html`);
+      // Letter through the real command line; the default in this process (the same command, seconds faster).
+      const args = ['checklist', file, '--format', 'html', ...(paper ? ['--paper', paper] : []), '--out', html];
+      if (paper) {
+        const r = runCli(args);
+        expect(r.code, r.stderr).toBe(0);
+      } else checklistCommand(parseArgs(args));
+      const text = readFileSync(html, 'utf8');
+      expect(text).toContain(`class="sheet-doc ${klass}"`);
+      const page = await browser.newPage();
+      await page.goto(`file://${html}`);
+      const pdf = join(dir, `sheet-paper-${paper ?? 'default'}.pdf`);
+      // The CSS page size decides, as a browser's own print dialog does with "default" paper.
+      await page.pdf({ path: pdf, preferCSSPageSize: true, pageRanges: '1' });
+      await page.close();
+      const info = execFileSync('pdfinfo', [pdf], { encoding: 'utf8' });
+      const m = /Page size:\s+([\d.]+) x ([\d.]+) pts/.exec(info)!;
+      expect([Math.round(Number(m[1])).toFixed(0), Math.round(Number(m[2])).toFixed(0)], `${paper}: ${m[0]}`).toEqual([w, h]);
+    }
+  });
 
   for (const [i, plan] of demoPlans.entries()) {
     it(`is one self-contained page that prints with the cautions first: ${plan.name}`, async () => {

@@ -10,6 +10,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
+import type { Reading } from '../../db/schema.js';
 import type { SheetAnswer } from '../../electron/ipc/channels.js';
 import { api, e2eSuite, freshDir, openScreen, outputDir, screenshot, type Host } from './harness.js';
 
@@ -35,6 +36,8 @@ const withUnit = (v: number, unit: string): string => (unit === 'deg' ? `${num(v
 const band = (min: number, max: number, unit: string): string => (unit === 'deg' ? `${num(min, unit)}°–${num(max, unit)}°` : `${num(min, unit)}–${num(max, unit)} ${SYMBOL[unit] ?? unit}`);
 
 const steps = (a: SheetAnswer): Step[] => a.sheet.stages.flatMap((s) => s.steps);
+/** The local calendar day as ISO 8601 writes a date (YYYY-MM-DD), the form a date field holds. */
+const localDay = (d: Date): string => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
 const flat = (t: string): string => t.replace(/\s+/g, ' ');
 /**
  * pdftotext joins a word broken at a line end and drops its hyphen ("multi-spark" may come back
@@ -62,7 +65,7 @@ function pdfText(pdf: string): string {
 }
 
 describe('the wiring sheet', () => {
-  it('opens a demo plan’s sheet, saves ticks and an out-of-range reading with its flag and causes, and keeps them after a reload', async () => {
+  it('opens a demo plan’s sheet, saves ticks and an out-of-range reading with its flag and causes, keeps them after a reload, survives a change made elsewhere, reaches “Finished”, and keeps what was typed when the host is gone', async () => {
     const { host, browser, page } = await startWorkshop(freshDir('sheet'));
     const plan = await saloonPlan(host);
     await openSheetFromWeigh(page, plan);
@@ -109,6 +112,10 @@ describe('the wiring sheet', () => {
     expect(low).toBeLessThan(r.min);
     const entry = page.getByTestId(`reading-entry-${coil.key}`);
     await entry.scrollIntoViewIfNeeded();
+    // The date taken starts at today (the day before and after reading it, in case midnight passes).
+    const dayBefore = localDay(new Date());
+    const dateShown = await entry.getByLabel('Date taken').inputValue();
+    expect([dayBefore, localDay(new Date())]).toContain(dateShown);
     // A comma decimal is refused beside the field, and what was typed stays.
     await entry.getByLabel('Your reading').fill(String(low).replace('.', ','));
     await entry.getByRole('button', { name: 'Save reading' }).click();
@@ -155,8 +162,28 @@ describe('the wiring sheet', () => {
     await entry2.getByRole('button', { name: new RegExp(`^Change the reading of ${num(low, 'ohm')} Ω`) }).click();
     await entry2.getByLabel('Your reading').fill(String(okMilli));
     await entry2.getByLabel('Unit').selectOption('mohm');
+    // Meanwhile the same reading is changed somewhere else (another window, here the host's API).
+    const coilCount = async (): Promise<number> => (await api<SheetAnswer>(host, 'sheet.get', { planId: plan.id })).readings.filter((x) => x.quantity === r.quantity).length;
+    const before = await coilCount();
+    const elsewhere = await api<Reading>(host, 'readings.update', {
+      id: mine.id,
+      expectedUpdatedAt: mine.updatedAt,
+      reading: { planId: plan.id, quantity: r.quantity, value: low, unit: 'ohm', takenOn: mine.takenOn, note: 'changed in another window' },
+    });
+    expect(elsewhere.updatedAt).not.toBe(mine.updatedAt);
+    await entry2.getByRole('button', { name: 'Save the change' }).click();
+    // Not saved, told as a problem saying what happened; what was typed stays, still as a change.
+    const stale = page.getByTestId(`reading-problem-${coil.key}`);
+    await stale.waitFor();
+    expect(flat(await stale.innerText())).toMatch(/Not saved: This reading was changed elsewhere .*it has been read again/);
+    expect(await entry2.getByLabel('Your reading').inputValue()).toBe(String(okMilli));
+    expect(await entry2.getByLabel('Unit').inputValue()).toBe('mohm');
+    expect(await page.getByTestId('sheet-flash').count()).toBe(0);
+    await screenshot(page, 'sheet-screen-stale');
+    // Saving again changes that reading (against its new version): no second reading appears.
     await entry2.getByRole('button', { name: 'Save the change' }).click();
     await expect.poll(() => page.getByTestId(`flag-${coil.key}`).getAttribute('data-band')).toBe('in');
+    expect(await coilCount()).toBe(before);
     const corrected = (await api<SheetAnswer>(host, 'sheet.get', { planId: plan.id })).readings.find((x) => x.id === mine.id)!;
     expect(corrected.value).toBeCloseTo(okMilli / 1000, 9);
     expect(corrected.unit).toBe('ohm');
@@ -178,15 +205,77 @@ describe('the wiring sheet', () => {
     await page.getByLabel('Plan status').selectOption({ label: 'Idea' });
     await expect.poll(async () => (await api<SheetAnswer>(host, 'sheet.get', { planId: plan.id })).status).toBe('draft');
 
+    // To "done" through the screen, as a restorer gets there: tick every fitting step left, and the
+    // plan moves from "Idea" to "Wired in" by itself; write an in-band reading (the middle of its
+    // band) beside every check, and it moves on to "Finished", the screen's word for done.
+    const status = page.getByLabel('Plan status');
+    const shownStatus = (): Promise<string> => status.evaluate((el) => (el as HTMLSelectElement).selectedOptions[0]!.text);
+    const progress = page.getByTestId('sheet-progress');
+    const start = await api<SheetAnswer>(host, 'sheet.get', { planId: plan.id });
+    expect(start.progress.checksInBand).toBeLessThan(start.progress.checkSteps);
+    let tickedNow = start.progress.fittingTicked;
+    for (const s of steps(start).filter((x) => x.fitting && !start.ticked.includes(x.key))) {
+      await page.getByTestId(`tick-${s.key}`).check();
+      tickedNow++;
+      await expect.poll(() => progress.innerText()).toContain(`${tickedNow} of ${start.progress.fittingSteps} fitting steps ticked`);
+    }
+    await expect.poll(shownStatus).toBe('Wired in');
+    expect(flat(await progress.innerText())).toContain('(wired in: every fitting step is ticked)');
+    const typeMiddle = async (s: Step): Promise<void> => {
+      const rr = s.reading!;
+      const mid = Number(((rr.min + rr.max) / 2).toFixed(4));
+      expect(mid, s.key).toBeGreaterThanOrEqual(rr.min);
+      expect(mid, s.key).toBeLessThanOrEqual(rr.max);
+      const e = page.getByTestId(`reading-entry-${s.key}`);
+      await e.getByLabel('Your reading').fill(String(mid));
+      await e.getByLabel('Your reading').press('Enter');
+      // Saved: the box empties for the next reading.
+      await expect.poll(() => e.getByLabel('Your reading').inputValue()).toBe('');
+    };
+    for (const s of steps(start).filter((x) => x.reading)) await typeMiddle(s);
+    // A measured value refines the checker's figures (a measured coil or lead wins over the
+    // catalogue), so a band can move after a later reading: the plug gap follows the checker's
+    // suggested gap. Read the sheet again and set again what no longer reads in range, as a
+    // restorer following the sheet would.
+    const outOfBand = (a: SheetAnswer): Step[] =>
+      steps(a).filter((x) => {
+        if (!x.reading) return false;
+        const latest = a.readings.filter((y) => y.quantity === x.reading!.quantity).sort((p, q) => (p.takenOn === q.takenOn ? q.id - p.id : p.takenOn < q.takenOn ? 1 : -1))[0];
+        return a.judged.find((j) => j.readingId === latest?.id && j.stepKey === x.key)?.band !== 'in';
+      });
+    for (let pass = 0; pass < 3; pass++) {
+      const again = outOfBand(await api<SheetAnswer>(host, 'sheet.get', { planId: plan.id }));
+      if (again.length === 0) break;
+      for (const s of again) await typeMiddle(s);
+    }
+    for (const s of steps(start).filter((x) => x.reading)) await expect.poll(async () => `${s.key}: ${await page.getByTestId(`flag-${s.key}`).getAttribute('data-band')}`).toBe(`${s.key}: in`);
+    await expect.poll(shownStatus).toBe('Finished');
+    expect(flat(await progress.innerText())).toContain(`${start.progress.checkSteps} of ${start.progress.checkSteps} checks in range (finished: wired, and every check reads in range)`);
+    expect((await api<SheetAnswer>(host, 'sheet.get', { planId: plan.id })).status).toBe('done');
+    await page.getByTestId('sheet-controls').evaluate((el) => el.scrollIntoView({ block: 'start' }));
+    await screenshot(page, 'sheet-screen-done');
+
     // With the host gone, a tick cannot be saved: the box keeps what was asked for, with the reason beside it.
     const third = steps(truth).filter((s) => s.fitting && !truth.ticked.includes(s.key))[2]!;
     await host.stop();
-    await page.getByTestId(`tick-${third.key}`).check();
+    await page.getByTestId(`tick-${third.key}`).uncheck();
     await page.getByTestId(`tick-error-${third.key}`).waitFor();
-    expect(await page.getByTestId(`tick-${third.key}`).isChecked()).toBe(true);
+    expect(await page.getByTestId(`tick-${third.key}`).isChecked()).toBe(false);
     expect(await page.getByTestId(`tick-error-${third.key}`).innerText()).toContain('not saved');
     await page.getByTestId(`tick-error-${third.key}`).evaluate((el) => el.scrollIntoView({ block: 'center' }));
     await screenshot(page, 'sheet-screen-tick-failed');
+    // Nor a reading: what was typed stays in its box, and the problem is told beside it.
+    const entry3 = page.getByTestId(`reading-entry-${coil.key}`);
+    await entry3.getByLabel('Your reading').fill('3.05');
+    await entry3.getByLabel('Note').fill('typed with the host stopped');
+    await entry3.getByRole('button', { name: 'Save reading' }).click();
+    const failed = page.getByTestId(`reading-problem-${coil.key}`);
+    await failed.waitFor();
+    expect(flat(await failed.innerText())).toMatch(/^\W*Not saved: Could not reach the workshop host/);
+    expect(await entry3.getByLabel('Your reading').inputValue()).toBe('3.05');
+    expect(await entry3.getByLabel('Note').inputValue()).toBe('typed with the host stopped');
+    await failed.evaluate((el) => el.scrollIntoView({ block: 'center' }));
+    await screenshot(page, 'sheet-screen-reading-failed');
     expect(browser.pageErrors.filter((e) => !e.includes('Failed to load resource'))).toEqual([]);
     expect(browser.blocked).toEqual([]);
   });
@@ -251,6 +340,24 @@ describe('the wiring sheet', () => {
         for (const [i, p] of pages.entries()) {
           expect(flat(p), `page ${i + 1}`).toContain(`Page ${i + 1} of ${pages.length}`);
           expect(squash(p), `page ${i + 1}`).toContain(squash(`Wiring sheet · ${SALOON}`));
+        }
+        // No step split across pages: each step's numbered title and its last printed line (its last
+        // likely cause, or its sentence when it has no reading) are on one page, in that order,
+        // before the next step's title.
+        const onPage = pages.map(squash);
+        const list = steps(truth);
+        for (const [i, s] of list.entries()) {
+          const title = squash(`${i + 1}. ${s.title}`);
+          const n = onPage.findIndex((p) => p.includes(title));
+          expect(n, `${s.key}: its title is on a page`).toBeGreaterThan(-1);
+          const p = onPage[n]!;
+          const from = p.indexOf(title) + title.length;
+          const last = squash(s.reading?.ifOutOfRange.at(-1) ?? s.text);
+          const at = p.indexOf(last, from);
+          expect(at, `${s.key}: its last line is on page ${n + 1} with its title`).toBeGreaterThan(-1);
+          const next = list[i + 1];
+          const nextAt = next ? p.indexOf(squash(`${i + 2}. ${next.title}`), from) : -1;
+          if (nextAt > -1) expect(at, `${s.key}: its last line comes before the next step`).toBeLessThan(nextAt);
         }
         // Pictures of the pages for a person to look at.
         for (const f of readdirSync(outputDir).filter((f) => f.startsWith(`sheet-${label}-`) && f.endsWith('.png'))) rmSync(path.join(outputDir, f));

@@ -25,6 +25,8 @@ type Props = {
   readings: readonly Reading[];
   bands: ReadonlyMap<number, Band>;
   onSaved: (what: string) => void;
+  /** Read the sheet again without a success note (after a reading was changed or deleted elsewhere). */
+  onReload: () => void;
   /** A reading was deleted: the sentence and the token that undoes it. */
   onRemoved: (r: Removal) => void;
   onDirty: (key: string, dirty: boolean) => void;
@@ -32,7 +34,15 @@ type Props = {
 
 const safeId = (key: string): string => key.replace(/[^a-zA-Z0-9_-]/g, '-');
 
-export function ReadingEntry({ planId, step, readings, bands, onSaved, onRemoved, onDirty }: Props): ReactNode {
+/** What a correction that met a newer or a deleted reading says (shown as "Not saved: ..."). */
+export const staleWords = {
+  changed: 'This reading was changed elsewhere after the sheet was read.',
+  reread: (value: string, takenOn: string): string =>
+    `This reading was changed elsewhere after the sheet was read; it has been read again (it is now ${value} on ${takenOn}). What you typed is kept: Save the change again to replace it, or Cancel the change.`,
+  deleted: 'This reading was deleted elsewhere after the sheet was read; the sheet has been read again. What you typed is kept: Save reading adds it as a new reading.',
+};
+
+export function ReadingEntry({ planId, step, readings, bands, onSaved, onReload, onRemoved, onDirty }: Props): ReactNode {
   const r = step.reading!;
   const units = unitChoices(r.unit);
   const blank = (): Form => ({ value: '', unit: units[0]!.value, takenOn: todayText(), note: '' });
@@ -65,13 +75,28 @@ export function ReadingEntry({ planId, step, readings, bands, onSaved, onRemoved
     setErrors({});
     setBusy(true);
     const res = editing ? await call('readings.update', { id: editing.id, expectedUpdatedAt: editing.updatedAt, reading: checked.data! }) : await call('readings.add', { reading: checked.data! });
-    setBusy(false);
-    if (!res.ok && res.error.code === 'STALE') {
-      // Changed elsewhere since the sheet was read: say so and show the sheet as it is now (typed values stay).
-      setEditing(null);
-      onSaved(res.error.message);
+    if (!res.ok && editing && (res.error.code === 'STALE' || res.error.code === 'NOT_FOUND')) {
+      // Changed or deleted elsewhere since the sheet was read: read the reading again, keep every
+      // character typed, and say what happened. The edit goes on against the reading as it is now,
+      // so the next Save changes it (never adds a second one); a deleted reading is added anew.
+      const again = await call('readings.list', { planId });
+      setBusy(false);
+      onReload();
+      if (!again.ok) {
+        setProblem(`${staleWords.changed} It could not be read again (${again.error.message}); reload the page before saving again.`);
+        return;
+      }
+      const now = again.value.find((x) => x.id === editing.id) ?? null;
+      if (now === null) {
+        setEditing(null);
+        setProblem(staleWords.deleted);
+      } else {
+        setEditing(now);
+        setProblem(staleWords.reread(valueText(now.value, now.unit), now.takenOn));
+      }
       return;
     }
+    setBusy(false);
     if (!res.ok) {
       const fields: Record<string, string> = {};
       for (const [k, m] of Object.entries(res.error.fields ?? {})) fields[k.replace(/^reading\./, '')] = m;
@@ -90,8 +115,11 @@ export function ReadingEntry({ planId, step, readings, bands, onSaved, onRemoved
     setBusy(true);
     const res = await call('readings.delete', { id: x.id, expectedUpdatedAt: x.updatedAt });
     setBusy(false);
-    if (!res.ok && (res.error.code === 'STALE' || res.error.code === 'NOT_FOUND')) onSaved(res.error.message);
-    else if (!res.ok) setProblem(res.error.message);
+    if (!res.ok && (res.error.code === 'STALE' || res.error.code === 'NOT_FOUND')) {
+      // Not deleted: the reading changed or went elsewhere. A problem, not a success; the list is read again.
+      setProblem(`${res.error.message} The readings have been read again.`);
+      onReload();
+    } else if (!res.ok) setProblem(res.error.message);
     else {
       if (editing?.id === x.id) {
         setEditing(null);

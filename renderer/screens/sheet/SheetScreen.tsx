@@ -304,6 +304,7 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
                   setFlash({ kind: 'done', text: what });
                   setVersion((v) => v + 1);
                 }}
+                onReload={() => setVersion((v) => v + 1)}
                 onRemoved={(r) => {
                   setFlash(null);
                   removal.announce(r);
