@@ -16,13 +16,13 @@ export * from './sheet-shapes.js';
 export * from './records-shapes.js';
 
 const id = z.number().int().positive();
-const byId = z.object({ id });
+const byId = z.strictObject({ id });
 /**
  * The `updatedAt` of the record as the screen showed it. Every update and delete carries it; if the
  * record changed since, the answer is STALE and nothing is written (the screen offers to reload).
  */
 const expectedUpdatedAt = z.string({ error: 'Send the updatedAt of the record as it was shown.' }).min(1, 'Send the updatedAt of the record as it was shown.');
-const byIdAt = z.object({ id, expectedUpdatedAt });
+const byIdAt = z.strictObject({ id, expectedUpdatedAt });
 /** Names one delete for 'removed.restore' (the undo). */
 const undoToken = z.number().int().positive();
 const removedKind = z.enum(['engine', 'part', 'plan', 'reading']);
@@ -55,35 +55,35 @@ export type SheetAnswer = z.infer<typeof sheetAnswer>;
 
 export const channels = {
   'app.info': {
-    request: z.object({}),
+    request: z.strictObject({}),
     response: z.object({ version: z.string(), dataDir: z.string(), schemaVersion: z.number().int(), host: z.enum(['desktop', 'browser']) }),
   },
   'demo.load': {
-    request: z.object({}),
+    request: z.strictObject({}),
     response: z.object({ enginesAdded: z.number().int(), partsAdded: z.number().int(), plansAdded: z.number().int() }),
   },
-  'engines.list': { request: z.object({}), response: z.array(engineSummary) },
+  'engines.list': { request: z.strictObject({}), response: z.array(engineSummary) },
   'engines.get': { request: byId, response: engine },
-  'engines.create': { request: z.object({ engine: engineInput }), response: engine },
-  'engines.update': { request: z.object({ id, expectedUpdatedAt, engine: engineInput }), response: engine },
+  'engines.create': { request: z.strictObject({ engine: engineInput }), response: engine },
+  'engines.update': { request: z.strictObject({ id, expectedUpdatedAt, engine: engineInput }), response: engine },
   /** Refused with IN_USE while plans use the engine, unless the user has confirmed the cascade. */
   'engines.delete': {
-    request: z.object({ id, expectedUpdatedAt, deletePlansToo: z.boolean() }),
+    request: z.strictObject({ id, expectedUpdatedAt, deletePlansToo: z.boolean() }),
     response: z.object({ deleted: z.literal(true), plansDeleted: z.number().int(), undoToken }),
   },
-  'parts.list': { request: z.object({ kind: partKind.optional() }), response: z.array(part) },
+  'parts.list': { request: z.strictObject({ kind: partKind.optional() }), response: z.array(part) },
   'parts.get': { request: byId, response: part },
-  'parts.create': { request: z.object({ part: partInput }), response: part },
-  'parts.update': { request: z.object({ id, expectedUpdatedAt, part: partInput }), response: part },
+  'parts.create': { request: z.strictObject({ part: partInput }), response: part },
+  'parts.update': { request: z.strictObject({ id, expectedUpdatedAt, part: partInput }), response: part },
   'parts.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), undoToken }) },
-  'plans.list': { request: z.object({ engineId: id.optional() }), response: z.array(plan) },
+  'plans.list': { request: z.strictObject({ engineId: id.optional() }), response: z.array(plan) },
   'plans.get': { request: byId, response: plan },
-  'plans.create': { request: z.object({ plan: planInput }), response: plan },
+  'plans.create': { request: z.strictObject({ plan: planInput }), response: plan },
   /** The status may be left out: then the stored one stays (it moves by 'plans.setStatus' and the work). */
-  'plans.update': { request: z.object({ id, expectedUpdatedAt, plan: planUpdateInput }), response: plan },
+  'plans.update': { request: z.strictObject({ id, expectedUpdatedAt, plan: planUpdateInput }), response: plan },
   'plans.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), readingsDeleted: z.number().int(), undoToken }) },
-  'readings.list': { request: z.object({ planId: id }), response: z.array(reading) },
-  'readings.add': { request: z.object({ reading: readingInput }), response: reading },
+  'readings.list': { request: z.strictObject({ planId: id }), response: z.array(reading) },
+  'readings.add': { request: z.strictObject({ reading: readingInput }), response: reading },
   'readings.delete': { request: byIdAt, response: z.object({ deleted: z.literal(true), undoToken }) },
   /** What deleting would take or meet, asked before the one question: an engine's plans and readings, a part's users. */
   'engines.contents': { request: z.strictObject({ id }), response: z.object({ plans: z.number().int().min(0), readings: z.number().int().min(0) }) },

@@ -5,7 +5,7 @@
  * come back trimmed by `check-view.ts`. The adapter's and checker's own errors become AppFailures
  * with their plain sentence; the store's errors are left for the caller's guard to translate.
  */
-import type { Part, Plan, Reading } from '../../db/schema.js';
+import type { Engine, Part, Plan, Reading } from '../../db/schema.js';
 import type { Repositories } from '../../db/repositories/index.js';
 import { compareSetups, searchBest, CheckerInputError, type SearchInput, type SearchResult } from '../checker/index.js';
 import { ignitionCautions } from '../safety/cautions.js';
@@ -33,8 +33,9 @@ function measuredGap(readings: readonly Reading[]): ShownFigure[] {
   return r && r.value > 0 && r.value <= 3 ? [{ name: 'plug gap', value: r.value, unit: 'mm', measured: true, source: 'measured' }] : [];
 }
 
-export function checkPlans(repos: Repositories, req: { engineId: number; planIds: number[] }): ComparisonAnswer {
-  const engine = repos.engines.get(req.engineId);
+export function checkPlans(repos: Repositories, req: { engineId: number; planIds: number[]; conditions?: Engine['conditions'] | undefined }): ComparisonAnswer {
+  const stored = repos.engines.get(req.engineId);
+  const engine: Engine = req.conditions ? { ...stored, conditions: req.conditions } : stored;
   const plans: Plan[] = req.planIds.map((id) => repos.plans.get(id));
   for (const p of plans) {
     if (p.engineId !== engine.id) {

@@ -1,9 +1,11 @@
 /**
  * What the "weigh a combination" screen receives: the checker's reports trimmed to what a person
- * reads, in display units (mJ, kV, mm), every number finite. These schemas import only zod, so the
- * renderer may use them through channels.ts; the dispatcher checks every answer against them.
+ * reads, in display units (mJ, kV, mm), every number finite. These schemas import only zod and the
+ * store's condition schema, so the renderer may use them through channels.ts; the dispatcher checks
+ * every answer against them.
  */
 import { z } from 'zod';
+import { conditionOverrides } from '../../db/schema.js';
 
 const id = z.number().int().positive();
 const finite = z.number().finite();
@@ -145,15 +147,21 @@ export const searchAnswer = z.object({
   leftOut: z.array(leftOutPart),
 });
 
-export const checkPlansRequest = z.object({
+export const checkPlansRequest = z.strictObject({
   engineId: id,
   planIds: z
     .array(id)
     .max(3, 'Compare at most three plans with the existing setup at once.')
     .refine((ids) => new Set(ids).size === ids.length, 'Each plan can be ticked only once.'),
+  /**
+   * Weigh with these working conditions in place of the engine's stored ones (the whole set: a
+   * condition left out takes its default). The weighing screen sends the air temperature just
+   * typed here while the engine's own copy is being saved, so the charts need not wait for the save.
+   */
+  conditions: conditionOverrides.optional(),
 });
 
-export const checkSearchRequest = z.object({
+export const checkSearchRequest = z.strictObject({
   engineId: id,
   top: z.number().int('Ask for a whole number of suggestions.').min(1, 'Ask for at least one suggestion.').max(10, 'Ask for at most ten suggestions.').optional(),
 });

@@ -5,6 +5,7 @@
  * screen readers). Everything is SVG attributes and classes, so it prints sharp and the CSP holds.
  */
 import { useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent, type ReactNode } from 'react';
+import { numberText } from '../app/number-text.js';
 import { Marker } from './Marker.js';
 import type { MarkerShape } from './palette.js';
 import { bandFill, requiredStyle } from './palette.js';
@@ -42,8 +43,6 @@ const W = 520;
 const H = 300;
 const M = { left: 54, right: 14, top: 14, bottom: 44 };
 
-const numberText = (v: number, digits: number): string =>
-  Number.isFinite(v) ? v.toLocaleString('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits }) : '—';
 
 export function LineChart({ title, description, x, xLabel, xUnit, yLabel, yUnit, lines, band, digits = 1, testId }: Props): ReactNode {
   const [index, setIndex] = useState<number | null>(null);

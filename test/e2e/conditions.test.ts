@@ -46,6 +46,25 @@ describe('working conditions', () => {
     await page.getByRole('button', { name: 'Weigh at this temperature' }).click();
     await expect.poll(() => page.getByTestId('ambient-message').innerText()).toMatch(/-40/);
     expect((await api<StoredEngine>(host, 'engines.get', { id: saloon.id })).conditions.ambientC).toBe(-18);
+
+    // The comparison is weighed at a typed temperature while it is saved; when the save is refused
+    // (here the engine was saved elsewhere meanwhile), it is weighed again with what is stored.
+    const elsewhere = await api<StoredEngine & { updatedAt: string }>(host, 'engines.get', { id: saloon.id });
+    const { id: _id, updatedAt, ...rest } = elsewhere;
+    await api(host, 'engines.update', { id: saloon.id, expectedUpdatedAt: updatedAt, engine: { ...rest, notes: 'Saved from another window.' } });
+    const bodies: Array<{ conditions?: { ambientC?: number } }> = [];
+    page.on('request', (r) => {
+      if (!r.url().endsWith('/api/invoke')) return;
+      const body = JSON.parse(r.postData() ?? '{}') as { channel?: string; request?: { conditions?: { ambientC?: number } } };
+      if (body.channel === 'check.plans') bodies.push(body.request ?? {});
+    });
+    await page.getByLabel('Ambient air (°C)').fill('5');
+    await page.getByRole('button', { name: 'Weigh at this temperature' }).click();
+    await expect.poll(() => page.getByTestId('ambient-message').innerText()).toMatch(/figures shown are for what is stored/);
+    await expect.poll(() => bodies.length).toBe(2);
+    expect(bodies[0]!.conditions?.ambientC).toBe(5);
+    expect(bodies[1]!.conditions).toBeUndefined();
+    expect((await api<StoredEngine>(host, 'engines.get', { id: saloon.id })).conditions.ambientC).toBe(-18);
   });
 
   it('sets a condition for one engine in its editor, keeps it, and refuses one out of range beside its field', async () => {

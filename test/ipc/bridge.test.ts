@@ -84,6 +84,20 @@ describe('malformed requests', () => {
   });
 });
 
+describe('unknown keys', () => {
+  // The rule of the whole product: a key nobody asked for is refused, never silently dropped.
+  it.each(Object.keys(channels))('%s: a request with a key the channel does not know is refused naming it, and changes no row', async (channel) => {
+    const before = counts();
+    const r = await call(channel, { unexpectedKey: 1 });
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.error.code).toBe('INVALID_INPUT');
+    // Named on the request as a whole, or (settings, whose keys are the setting names) under the key itself.
+    expect(r.error.fields?.['_'] ?? r.error.fields?.['unexpectedKey']).toMatch(/unexpectedKey/);
+    expect(counts()).toEqual(before);
+  });
+});
+
 describe('unknown channels', () => {
   it.each(['engines.drop', 'toString', '__proto__', 42, null])('answers UNKNOWN_CHANNEL for %s and changes nothing', async (channel) => {
     const before = counts();

@@ -191,6 +191,9 @@ describe('check.plans refusals', () => {
     ['an engine id that is text', { engineId: 'one', planIds: [] }, 'engineId'],
     ['no engine', { planIds: [1] }, 'engineId'],
     ['a negative plan id', { engineId: 1, planIds: [-2] }, 'planIds.0'],
+    ['a key it does not know', { engineId: 1, planIds: [], colour: 'red' }, '_'],
+    ['a working condition it does not know', { engineId: 1, planIds: [], conditions: { ambientF: 0 } }, 'conditions'],
+    ['an air temperature no engine meets', { engineId: 1, planIds: [], conditions: { ambientC: 500 } }, 'conditions.ambientC'],
   ])('answers INVALID_INPUT for %s and writes nothing', async (_label, payload, field) => {
     const before = counts();
     const r = await call('check.plans', payload);
@@ -199,6 +202,27 @@ describe('check.plans refusals', () => {
     expect(r.error.code).toBe('INVALID_INPUT');
     expect(r.error.fields).toHaveProperty([field]);
     expect(counts()).toEqual(before);
+  });
+
+  it('weighs with working conditions sent beside the request exactly as with the same conditions saved, and stores nothing', async () => {
+    // The weighing screen sends a just-typed air temperature with the request while it saves it.
+    const engines = await ok('engines.list', {});
+    const engine: Engine = await ok('engines.get', { id: engines[0].id });
+    const plans: Plan[] = await ok('plans.list', { engineId: engine.id });
+    const planIds = plans.slice(0, 3).map((p) => p.id);
+    const cold = { ...engine.conditions, ambientC: -18 };
+    const before = counts();
+    const sent: ComparisonAnswer = await ok('check.plans', { engineId: engine.id, planIds, conditions: cold });
+    expect(await ok('engines.get', { id: engine.id })).toEqual(engine);
+    expect(counts()).toEqual(before);
+    const { id, updatedAt, ...rest } = engine;
+    await ok('engines.update', { id, expectedUpdatedAt: updatedAt, engine: { ...rest, conditions: cold } });
+    const saved: ComparisonAnswer = await ok('check.plans', { engineId: engine.id, planIds });
+    expect(sent).toEqual(saved);
+    // And the air temperature is what moved the figures (a cold battery cranks lower; common practice).
+    const warm: ComparisonAnswer = await ok('check.plans', { engineId: engine.id, planIds, conditions: { ...engine.conditions, ambientC: 20 } });
+    const supply = (a: ComparisonAnswer): number => a.conditions.find((c) => /cranking/i.test(c.name) && c.unit === 'V')!.value;
+    expect(supply(sent)).toBeLessThan(supply(warm));
   });
 
   it('answers NOT_FOUND for a plan or an engine that is not there', async () => {

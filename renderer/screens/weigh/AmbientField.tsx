@@ -1,7 +1,8 @@
 /**
- * A cold morning one setting away: the air temperature the engine is weighed at. Applying it saves
- * the engine's own `ambientC` working condition (the same one the engine editor sets) and tells the
- * screen to weigh again; a blank box goes back to the default. The air temperature moves the
+ * A cold morning one setting away: the air temperature the engine is weighed at. Applying it has the
+ * screen weigh again at once and saves the engine's own `ambientC` working condition (the same one
+ * the engine editor sets) beside it; a refused save weighs again with what is stored. A blank box
+ * goes back to the default. The air temperature moves the
  * cranking supply (a cold battery), the charge at the cranking point and the coil's resistance.
  */
 import { useState, type FormEvent, type ReactNode } from 'react';
@@ -12,15 +13,19 @@ import { NoticeMark } from '../../app/Notice.js';
 
 type Props = {
   engine: Engine;
-  /** The engine as stored after the change: weigh again (comparison and shelf) with it. */
+  /** Weigh at once with these working conditions; settles when the comparison has answered. */
+  onWeigh: (conditions: Engine['conditions']) => Promise<void>;
+  /** The engine as stored after the change (the shelf can be searched again with it). */
   onSaved: (engine: Engine) => void;
+  /** The save was refused: weigh again with what is stored. */
+  onNotSaved: () => void;
 };
 
 const amb = conditionByKey.ambientC;
 
 const shown = (v: number | undefined): string => (v === undefined ? '' : String(v));
 
-export function AmbientField({ engine, onSaved }: Props): ReactNode {
+export function AmbientField({ engine, onWeigh, onSaved, onNotSaved }: Props): ReactNode {
   // The latest stored copy: a second change must not send back the first one's stale record.
   const [saved, setSaved] = useState<Engine | null>(null);
   const current = saved && saved.id === engine.id ? saved : engine;
@@ -45,11 +50,13 @@ export function AmbientField({ engine, onSaved }: Props): ReactNode {
     if (p.value === null) delete conditions.ambientC;
     else conditions.ambientC = p.value;
     setBusy(true);
+    await onWeigh(conditions);
     const r = await call('engines.update', { id, expectedUpdatedAt: updatedAt, engine: { ...rest, conditions } });
     setBusy(false);
     if (!r.ok) {
+      onNotSaved();
       const beside = r.error.fields?.['engine.conditions.ambientC'];
-      return setMessage({ kind: 'problem', text: beside ?? r.error.message });
+      return setMessage({ kind: 'problem', text: `${beside ?? r.error.message} The figures shown are for what is stored.` });
     }
     setSaved(r.value);
     setText({ for: r.value.id, value: shown(r.value.conditions.ambientC) });

@@ -5,7 +5,7 @@
  * without asking, whether the person leaves the screen, picks another engine or opens another plan.
  */
 import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
-import type { Plan, PlanStatus } from '../../../db/schema.js';
+import type { Engine, Plan, PlanStatus } from '../../../db/schema.js';
 import type { ShelfSuggestion, ShownSetup } from '../../../electron/ipc/channels.js';
 import type { CurrentEngine } from '../../app/current-engine.js';
 import { Confirm } from '../../app/Dialog.js';
@@ -70,20 +70,38 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
   const [printed, setPrinted] = useState<{ kind: NoticeKind; text: string } | null>(null);
 
   const ready = plansFor === engineId && ticked.for === engineId;
-  // A changed working condition weighs again without reading the plans again.
-  const [conditionsVersion, setConditionsVersion] = useState(0);
-  const comparison = useComparison(engineId, ticked.ids, ready, `${plansVersion}.${conditionsVersion}`);
+  // A changed working condition (the air temperature) is weighed at once with the conditions just
+  // typed, while the engine's own copy is saved beside it; the plans are not read again. A failed
+  // save takes the typed conditions back, so the figures always match what is stored.
+  const [weighAt, setWeighAt] = useState<{ for: number; conditions: Engine['conditions'] } | null>(null);
+  const comparison = useComparison(engineId, ticked.ids, ready, String(plansVersion), weighAt && weighAt.for === engineId ? weighAt.conditions : undefined);
   const [shelfVersion, setShelfVersion] = useState(0);
   const search = useShelfSearch(engineId, shelfVersion);
-  // After a changed working condition the shelf is searched again once the comparison has answered,
-  // so the two do not share the processor and the charts come back first. `undefined`: nothing due.
-  const shelfAfter = useRef<unknown>(undefined);
+  // The shelf is searched again once the change is saved (the search reads the stored engine) and
+  // the comparison has answered, so the two do not share the processor and the charts come first.
+  const [shelfDue, setShelfDue] = useState(false);
+  // The save of a changed condition waits for the comparison's answer (at most 3 s): the store's
+  // write holds the main process for the length of a disk flush, which the charts need not wait for.
+  const weighed = useRef<{ before: unknown; resolve: () => void } | null>(null);
   useEffect(() => {
-    if (shelfAfter.current === undefined || comparison.busy) return;
-    if (comparison.value === shelfAfter.current && comparison.problem === null) return;
-    shelfAfter.current = undefined;
-    setShelfVersion((v) => v + 1);
+    const w = weighed.current;
+    if (!w || comparison.busy) return;
+    if (comparison.value === w.before && comparison.problem === null) return;
+    weighed.current = null;
+    w.resolve();
   }, [comparison]);
+  const weighNow = (id: number, conditions: Engine['conditions']): Promise<void> =>
+    new Promise((resolve) => {
+      weighed.current?.resolve();
+      weighed.current = { before: comparison.value, resolve };
+      setTimeout(resolve, 3000);
+      setWeighAt({ for: id, conditions });
+    });
+  useEffect(() => {
+    if (!shelfDue || comparison.busy) return;
+    setShelfDue(false);
+    setShelfVersion((v) => v + 1);
+  }, [comparison, shelfDue]);
   useLeaveGuard(editing.dirty, editing.name ? `The plan “${editing.name}”` : 'The new plan');
 
   // Without a remembered engine, or with one that is gone, start on the first in the list.
@@ -255,10 +273,9 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
             <AmbientField
               key={e.id}
               engine={e}
-              onSaved={() => {
-                shelfAfter.current = comparison.value;
-                setConditionsVersion((v) => v + 1);
-              }}
+              onWeigh={(conditions) => weighNow(e.id, conditions)}
+              onSaved={() => setShelfDue(true)}
+              onNotSaved={() => setWeighAt(null)}
             />
             {printed ? (
               <Notice kind={printed.kind} onDismiss={() => setPrinted(null)} testId="weigh-printed">

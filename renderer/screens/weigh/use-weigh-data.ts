@@ -59,22 +59,32 @@ export function useEngine(engineId: number | null, version: number): { engine: L
   return { engine, plans: plans.list, plansFor: plans.for };
 }
 
-/** The comparison of the engine's fitted ignition with the ticked plans. */
-export function useComparison(engineId: number | null, ticked: readonly number[], ready: boolean, version: string): Loaded<ComparisonAnswer> {
+/**
+ * The comparison of the engine's fitted ignition with the ticked plans; `conditions`, when given,
+ * are weighed in place of the engine's stored working conditions (a change not yet saved).
+ */
+export function useComparison(
+  engineId: number | null,
+  ticked: readonly number[],
+  ready: boolean,
+  version: string,
+  conditions?: Engine['conditions'] | undefined,
+): Loaded<ComparisonAnswer> {
   const [state, setState] = useState<Loaded<ComparisonAnswer>>(start);
   const key = ticked.join(',');
+  const conditionsKey = conditions ? JSON.stringify(conditions) : '';
   useEffect(() => {
     if (engineId === null || !ready) return;
     let live = true;
     setState((s) => ({ ...s, busy: true }));
-    void call('check.plans', { engineId, planIds: [...ticked] }).then((r) => {
+    void call('check.plans', { engineId, planIds: [...ticked], ...(conditions ? { conditions } : {}) }).then((r) => {
       if (!live) return;
       setState(r.ok ? { value: r.value, problem: null, busy: false } : { value: null, problem: r.error.message, busy: false });
     });
     return () => {
       live = false;
     };
-  }, [engineId, key, ready, version]);
+  }, [engineId, key, ready, version, conditionsKey]);
   return state;
 }
 

@@ -1,4 +1,5 @@
 /** Plain words, units and number formats for the "weigh a combination" screen. */
+import { numberText } from '../../app/number-text.js';
 import { gapText, unitLabel, type GapUnit } from '../../app/units.js';
 
 /** Our own words for the verdicts (each also has its spark-gap mark and a colour) and the plan statuses: one list, shared with the sheet. */
@@ -18,8 +19,7 @@ export const feedChoices = [
   },
 ] as const;
 
-export const number = (v: number, digits = 1): string =>
-  Number.isFinite(v) ? v.toLocaleString('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits }) : '—';
+export const number = numberText;
 
 export const rpmText = (v: number): string => `${number(v, 0)} rpm`;
 
