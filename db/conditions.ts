@@ -190,8 +190,8 @@ export const conditionDescriptors: readonly ConditionDescriptor[] = [
   },
   {
     key: 'secondaryCeilingV', group: 'coil', label: 'Coil secondary rating when the coil gives none', unit: 'kV', perUnit: 1000, min: 10_000, max: 80_000,
-    why: 'Canister coils are built for about 30 to 40 kV.', usedWhen: 'Used for a coil whose own record gives no rating.',
-    byDefault: fixed(35_000, MEMORY),
+    why: 'Canister coils are built for about 30 to 40 kV.', usedWhen: 'Used for a coil whose own record gives no rating; left blank, 30 kV is taken (40 kV with a capacitive-discharge unit).',
+    byDefault: fixed(30_000, MEMORY),
   },
   {
     key: 'arcVoltageV', group: 'coil', label: 'Spark arc voltage', unit: 'V', perUnit: 1, min: 200, max: 3000,

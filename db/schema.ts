@@ -206,7 +206,7 @@ export const coilFields = z.object({
   maxDissipationW: positive('Maximum dissipation', 500).nullable(),
   /**
    * Rated secondary (insulation) voltage in kV, as printed on a coil box; absent or null means the
-   * checker's labelled default (about 35 kV for a canister coil, from memory).
+   * checker's labelled default (30 kV, or 40 kV with a capacitive-discharge unit; from memory).
    */
   ratedSecondaryKv: positive('Rated secondary voltage', 100).nullable().optional(),
   /** Coupling between the windings, when the maker gives it; absent or null: the engine's condition. */

@@ -2,7 +2,7 @@
  * Operating conditions: the defaults the checker assumes, each labelled with where it came from,
  * and the merge with whatever the caller overrides (an engine's own values, a measured reading).
  */
-import type { ConditionInputs, ConditionName, EngineSpec, Provenance, ResolvedConditions, Sourced } from './types.js';
+import type { ConditionInputs, ConditionName, EngineSpec, Provenance, ResolvedConditions, Sourced, SwitchingKind } from './types.js';
 
 const WORKSHOP: Provenance = 'default (workshop documentation)';
 const MEMORY: Provenance = 'default (from memory)';
@@ -115,48 +115,45 @@ export function defaultConditions(engine: EngineSpec, ambientC = 20): ResolvedCo
     // A healthy battery at rest, neither charging nor loaded: 12.4 V (6.2 V on 6 V), common practice.
     restingBatteryV: six ? d(6.2, PRACTICE) : d(12.4, PRACTICE),
     // The secondary a coil is built to give (its insulation rating) when the coil record gives
-    // none: canister coils are rated at 30 to 40 kV (from memory); the middle is taken.
-    secondaryCeilingV: d(35_000, MEMORY),
+    // none: 30 kV, the default for points and inductive systems. While it keeps a default label a
+    // setup takes the default for its own kind instead (`secondaryCeilingDefaultV`: 40 kV with a
+    // capacitive-discharge unit); an engine's own value holds for every setup.
+    secondaryCeilingV: d(secondaryCeilingDefaultV('points'), MEMORY),
   };
 }
+
+/**
+ * The coil's rated secondary (insulation) voltage taken when neither the coil nor the engine gives
+ * one, by the kind of system: canister coils are built for 30 to 40 kV (from memory); 30 kV behind
+ * points, a transistor or breakerless inductive module and on a magneto, 40 kV for a coil run from a
+ * capacitive-discharge unit, whose fast rise asks more of the insulation (from memory).
+ */
+export function secondaryCeilingDefaultV(kind: SwitchingKind): number {
+  return kind === 'capacitive-discharge' ? 40_000 : 30_000;
+}
+
+/**
+ * The secondary ceiling a setup of `kind` uses when its coil gives no rating: the engine's own
+ * value when one was given (any label but a default's), else the default for the kind.
+ */
+export function secondaryCeilingFor(c: ResolvedConditions, kind: SwitchingKind): Sourced {
+  const given = c.secondaryCeilingV;
+  if (!given.provenance.startsWith('default')) return given;
+  return kind === 'capacitive-discharge' ? CEILING_CD : CEILING_INDUCTIVE;
+}
+// The two defaults as shared values (a search prepares thousands of setups).
+const CEILING_INDUCTIVE: Readonly<Sourced> = Object.freeze(d(secondaryCeilingDefaultV('points'), MEMORY));
+const CEILING_CD: Readonly<Sourced> = Object.freeze(d(secondaryCeilingDefaultV('capacitive-discharge'), MEMORY));
 
 /**
  * Magnetic coupling of primary and secondary in a closed-iron canister coil: oil-filled canister
  * coils are quoted at 0.98 to 0.999 (from memory). Only the capacitive-discharge peak uses it (its
  * fast transfer rings through the leakage inductance 2 (1 - k) Lp); the inductive forms take the
  * coil as ideal. It is the default of the working condition `couplingK`. The SPICE exporter draws
- * its coupling element with this same value (an engine's own `couplingK` is not passed to decks yet).
+ * its coupling element with the coupling the report's circuit carries (the coil's own, else the
+ * engine's condition), falling back to this value (electron/spice/decks.ts, `couplingOf`).
  */
 export const DEFAULT_COUPLING_K: Readonly<Sourced> = Object.freeze(d(0.995, MEMORY));
-
-/**
- * The range a caller may set each condition to (inclusive), for the app, the plan file and the
- * checker's own guard. Wide enough for any real installation, narrow enough to refuse a typo.
- */
-export const conditionRanges: Record<ConditionName, readonly [number, number]> = {
-  runningSupplyV: [4, 16],
-  crankingSupplyV: [2, 14],
-  harnessResistanceOhm: [0, 2],
-  ambientC: [-40, 50],
-  underBonnetC: [-40, 150],
-  volumetricEfficiency: [0.3, 1.2],
-  ambientPressurePa: [50_000, 110_000],
-  inletChargeC: [-40, 150],
-  pointsContactResistanceOhm: [0, 1],
-  secondaryCapacitanceF: [10e-12, 500e-12],
-  transferEfficiency: [0.3, 1],
-  arcVoltageV: [200, 3000],
-  fouledShuntOhm: [10_000, 100e6],
-  ballastThermalResistanceKPerW: [1, 50],
-  coilDissipationLimitW: [10, 300],
-  currentLimitHoldS: [0, 5e-3],
-  marginRatio: [1, 3],
-  polytropicIndex: [1.1, 1.4],
-  couplingK: [0.9, 0.9999],
-  dynamoCutInRpm: [300, 3000],
-  restingBatteryV: [4, 14],
-  secondaryCeilingV: [10_000, 80_000],
-};
 
 /** Defaults overlaid with the caller's values; a non-finite override is ignored (the default stands). */
 export function resolveConditions(engine: EngineSpec, inputs?: ConditionInputs): ResolvedConditions {

@@ -112,6 +112,7 @@ export function withCrankingBypass(p: PreparedSetup, setup: SetupSpec, c: Resolv
     capV: p.capV,
     clampCapV: p.clampCapV,
     ceilingV: p.ceilingV,
+    ceilingProvenance: p.ceilingProvenance,
     peakVPerA: p.peakVPerA,
     dampingFactor: p.dampingFactor,
     couplingK: p.couplingK,

@@ -85,8 +85,11 @@ function fillPoint(g: RpmGrid, i: number, rpm: number, cranking: boolean, engine
   g.densityFactor[i] = (scratch.pressurePa / ATM_PA) * (REFERENCE_TEMPERATURE_K / Math.max(1, scratch.temperatureK));
 }
 
-/** The sweep's point count is this many at least and at most (the command line and the plan file take the same). */
-export const MIN_RPM_POINTS = 2;
+/**
+ * The sweep's point count is this many at least and at most (the command line and the plan file
+ * take the same). Three at least, so the sweep always holds cranking, the entered idle and redline.
+ */
+export const MIN_RPM_POINTS = 3;
 export const MAX_RPM_POINTS = 2000;
 
 /** A requested point count made whole and kept within MIN_RPM_POINTS..MAX_RPM_POINTS (200 when not a number). */
@@ -119,8 +122,8 @@ function fillEven(out: Float64Array, from: number, count: number, lo: number, hi
 /**
  * The sweep's rpm: `n` points, cranking first, then evenly from cranking to 110 % of redline on
  * round values (whole rpm wherever the step allows), with the entered idle and redline exactly
- * in place of their nearest points. With n = 2 the points are cranking and redline; with 3,
- * cranking, idle and redline.
+ * in place of their nearest points. With n = 3 (the fewest a check asks for, MIN_RPM_POINTS) the
+ * points are cranking, idle and redline; called directly with n = 2, cranking and redline.
  */
 export function sweepRpm(engine: EngineSpec, n: number): Float64Array {
   const out = new Float64Array(n);

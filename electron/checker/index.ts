@@ -14,7 +14,7 @@ import type { Baseline } from './rules/context.js';
 import type { CheckOptions, ConditionInputs, EngineSpec, PlugGapSuggestion, SetupReport, SetupSpec } from './types.js';
 
 export * from './types.js';
-export { resolveConditions, defaultConditions, conditionUnits, kelvin, crankingFloorV, CRANKING_FLOOR_TABLE, DEFAULT_COUPLING_K } from './conditions.js';
+export { resolveConditions, defaultConditions, conditionUnits, kelvin, crankingFloorV, CRANKING_FLOOR_TABLE, DEFAULT_COUPLING_K, secondaryCeilingDefaultV, secondaryCeilingFor } from './conditions.js';
 export { compareSetups, MAX_CANDIDATES } from './compare.js';
 export { searchBest } from './search.js';
 export { circuitAtRpm } from './report.js';

@@ -3,7 +3,7 @@
  * and cold (with the iron ballast at its self-heated equilibrium), time constants, final currents,
  * secondary constants, the CD stage. Done once per setup so the rpm loop is arithmetic only.
  */
-import { DEFAULT_COUPLING_K, kelvin } from './conditions.js';
+import { DEFAULT_COUPLING_K, kelvin, secondaryCeilingDefaultV, secondaryCeilingFor } from './conditions.js';
 import { RunningBallast } from './ballast.js';
 import { meanSquareCurrentA2 } from './charge.js';
 import { REVERSED_POLARITY_FACTOR } from './breakdown.js';
@@ -14,7 +14,7 @@ import { copperResistanceOhm, finalCurrentA } from './primary.js';
 import { effectiveSecondaryCapacitanceF, secondaryDampingFactor, secondaryRiseTimeS, turnsRatio, voltsPerAmp } from './secondary.js';
 import { ironBallastResistanceOhm, selfHeatedTemperatureK } from './thermal.js';
 import { dwellTimeS, DwellMode, type DwellParams } from './timing.js';
-import type { BallastSpec, BreakdownModel, EngineSpec, ResolvedConditions, SetupSpec, SwitchingKind } from './types.js';
+import type { BallastSpec, BreakdownModel, EngineSpec, Provenance, ResolvedConditions, SetupSpec, SwitchingKind } from './types.js';
 import { sparkRateHz } from './dwell.js';
 import { crankingPath, crankingSupplyOf, supplyUnderPowerLoadV } from './cranking.js';
 
@@ -77,8 +77,10 @@ export interface PreparedSetup extends DwellParams {
   capV: number;
   /** n x clamp, or Infinity without a clamp: the circuit's own limit, before the ceiling. */
   clampCapV: number;
-  /** The coil's rated secondary (insulation) voltage: its own rating, else the labelled condition. */
+  /** The coil's rated secondary (insulation) voltage: its own rating, else the engine's, else the default for the kind. */
   ceilingV: number;
+  /** Where `ceilingV` came from ('catalogue' for the coil's own rating). */
+  ceilingProvenance: Provenance;
   /** Inductive peak per primary ampere at break: sqrt(Lp / C_eff) x efficiency x secondary damping. */
   peakVPerA: number;
   /** e^(-alpha t*) of the secondary's series resistance (source-free series RLC, secondary.ts). */
@@ -230,8 +232,11 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
   const eta = Math.min(1, pos(c.transferEfficiency.value, 0.8, 'The transfer efficiency', issues));
   const clampV = m && m.primaryClampV !== null && m.primaryClampV > 0 ? m.primaryClampV : null;
   const clampCapV = clampV !== null ? n * clampV : Infinity;
-  // The coil's insulation rating caps whatever the circuit could reach (its own rating, else the labelled default).
-  const ceilingV = typeof coil.ratedSecondaryV === 'number' && coil.ratedSecondaryV > 0 ? coil.ratedSecondaryV : pos(c.secondaryCeilingV.value, 35_000, 'The secondary ceiling', issues);
+  // The coil's insulation rating caps whatever the circuit could reach: its own rating, else the
+  // engine's value, else the labelled default for this kind of system (conditions.ts).
+  const ceiling = typeof coil.ratedSecondaryV === 'number' && coil.ratedSecondaryV > 0 ? null : secondaryCeilingFor(c, kind);
+  const ceilingV = ceiling === null ? (coil.ratedSecondaryV as number) : pos(ceiling.value, secondaryCeilingDefaultV(kind), 'The secondary ceiling', issues);
+  const ceilingProvenance: Provenance = ceiling === null ? 'catalogue' : ceiling.provenance;
   const capV = Math.min(clampCapV, ceilingV);
   const leadOhm = setup.leads ? nonNeg(setup.leads.resistancePerLeadOhm, 0) : 0;
   const plugOhm = setup.plug && setup.plug.resistor ? nonNeg(setup.plug.resistorOhm, 0) : 0;
@@ -323,6 +328,7 @@ export function prepareSetup(engine: EngineSpec, setup: SetupSpec, c: ResolvedCo
     capV,
     clampCapV,
     ceilingV,
+    ceilingProvenance,
     peakVPerA: voltsPerAmp(lp, cEff) * eta * damping,
     dampingFactor: damping,
     couplingK,

@@ -29,7 +29,8 @@ export function setupFigures(engine: EngineSpec, grids: EngineGrids, p: Prepared
   const f = (name: string, value: number, unit: string): void => {
     out.push({ name, value: fin(value), unit });
   };
-  f('coil secondary ceiling (insulation rating)', p.ceilingV / 1000, 'kV');
+  // With where it came from: the coil's rating, the engine's value, or the default for the kind (from memory).
+  out.push({ name: 'coil secondary ceiling (insulation rating)', value: fin(p.ceilingV / 1000), unit: 'kV', provenance: p.ceilingProvenance });
   let capped = 0;
   for (let i = 0; i < ws.n; i++) if (ws.uncappedV[i]! > p.ceilingV) capped++;
   f('sweep points capped at the ceiling', capped, '');

@@ -4,7 +4,7 @@
  */
 import { whatToDo } from './advice.js';
 import { noSparkWords, type NoSparkWords } from './no-spark.js';
-import { conditionUnits } from './conditions.js';
+import { conditionUnits, secondaryCeilingFor } from './conditions.js';
 import type { Analysis, Session } from './session.js';
 import type { RpmGrid } from './grid.js';
 import type { Workspace } from './sweep.js';
@@ -90,19 +90,16 @@ function circuitOf(a: Analysis): ResolvedCircuit {
 function inputsOf(s: Session, a: Analysis): Figure[] {
   const out: Figure[] = [];
   for (const key of Object.keys(s.conditions) as ConditionName[]) {
-    const v = s.conditions[key];
+    // The ceiling's default depends on the kind of system: the one this setup takes (conditions.ts).
+    const v = key === 'secondaryCeilingV' ? secondaryCeilingFor(s.conditions, a.prep.kind) : s.conditions[key];
     out.push({ name: key, value: v.value, unit: conditionUnits[key], provenance: v.provenance });
   }
   const coil = a.setup.coil;
   out.push({ name: 'coil primary resistance at 20 degC', value: coil.primaryResistanceOhm20C.value, unit: 'ohm', provenance: coil.primaryResistanceOhm20C.provenance });
   // Only the capacitive-discharge peak uses the coupling (its transfer rings through the leakage).
   if (a.prep.cd) out.push({ name: 'coil coupling coefficient', value: a.prep.couplingK, unit: '', provenance: a.setup.coil.couplingK != null ? 'catalogue' : s.conditions.couplingK.provenance });
-  const rated = coil.ratedSecondaryV;
-  out.push(
-    typeof rated === 'number' && rated > 0
-      ? { name: 'coil secondary ceiling', value: rated, unit: 'V', provenance: 'catalogue' }
-      : { name: 'coil secondary ceiling', value: s.conditions.secondaryCeilingV.value, unit: 'V', provenance: s.conditions.secondaryCeilingV.provenance },
-  );
+  // The coil's own rating, else the engine's value, else the default for this kind of system.
+  out.push({ name: 'coil secondary ceiling', value: a.prep.ceilingV, unit: 'V', provenance: a.prep.ceilingProvenance });
   const b = a.setup.ballast;
   if (b) {
     out.push({ name: 'ballast resistance at 20 degC', value: b.coldResistanceOhm.value, unit: 'ohm', provenance: b.coldResistanceOhm.provenance });

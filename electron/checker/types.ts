@@ -122,7 +122,8 @@ export interface CoilSpec {
   maxDissipationW: number | null;
   /**
    * Rated (insulation) secondary voltage: the most the coil is built to give. Absent or null: the
-   * `secondaryCeilingV` condition (a labelled default).
+   * engine's `secondaryCeilingV` condition, or while that is a default, the default for the
+   * setup's kind (30 kV, 40 kV with a capacitive-discharge unit; from memory).
    */
   ratedSecondaryV?: number | null;
   /**

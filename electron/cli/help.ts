@@ -6,7 +6,7 @@ Usage:
       Check the engine's existing setup and up to three candidates in the plan file; prints the
       comparison report (verdicts, rules with why and what to do, key operating points). --sweep
       adds every rpm point of the sweep: cranking, then round speeds to 110 % of redline with the
-      entered idle and redline exactly; --rpm-points sets how many (2 to 2000, default 200).
+      entered idle and redline exactly; --rpm-points sets how many (3 to 2000, default 200).
   npm run cli -- search <bin.json> [--top N] [--rpm-points N]
       Try every module x coil x ballast in the parts bin on the engine; prints the N best (default 5).
   npm run cli -- netlist <plan.json> --rpm R [--candidate N] [--scenario break|fouled|cd|charge] [--coupling K]

@@ -83,11 +83,11 @@ const search: SearchInput = {
 const evaluated = searchBest(search).evaluated;
 const searchStats = time(() => searchBest(search), 2, 15);
 
-// 3. One operating point: the checker (a two-point sweep, no gap search) against one ngspice run.
+// 3. One operating point: the checker (the smallest sweep, cranking, idle and redline; no gap search) against one ngspice run.
 const spec = setupOf('Single point', coils[4]!, modules[2]!, null, false);
-const single = checkSetup(benchEngine, spec, undefined, { rpmPoints: 2, skipGapSuggestion: true });
-const rpm = single.points[1]!.rpm;
-const checkerPoint = time(() => checkSetup(benchEngine, spec, undefined, { rpmPoints: 2, skipGapSuggestion: true }), 200, 2000);
+const single = checkSetup(benchEngine, spec, undefined, { rpmPoints: 3, skipGapSuggestion: true });
+const rpm = single.points.at(-1)!.rpm;
+const checkerPoint = time(() => checkSetup(benchEngine, spec, undefined, { rpmPoints: 3, skipGapSuggestion: true }), 200, 2000);
 const deck = buildDeck(circuitFromReport(spec, single, rpm), 'break');
 const ngspicePoint = time(() => runNgspice(deck.text, deck.measures), 2, 15);
 

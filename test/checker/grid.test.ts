@@ -53,11 +53,15 @@ describe('the sweep grid', () => {
     for (const x of rpm) if (!entered.has(x)) expect(Number.isInteger(x), `${x}`).toBe(true);
   });
 
-  it('with fewer points than speeds to show, keeps the ones that judge the engine', () => {
-    // 2 points: cranking and redline; 3: cranking, idle, redline; 4: and 110 % of redline.
-    expect(Array.from(sweepRpm(fourCylinder, 2))).toEqual([180, 6000]);
+  it('with the fewest points a check takes, still holds cranking, the entered idle and redline', () => {
+    // 3 points (the least a check asks for): cranking, idle, redline; 4: and 110 % of redline.
     expect(Array.from(sweepRpm(fourCylinder, 3))).toEqual([180, 800, 6000]);
     expect(Array.from(sweepRpm(fourCylinder, 4))).toEqual([180, 800, 6000, 6600]);
+    // A check asked for fewer is held at 3, so its sweep never loses the idle.
+    for (const asked of [1, 2]) {
+      const r = checkSetup(fourCylinder, pointsSetup(), undefined, { rpmPoints: asked, skipGapSuggestion: true });
+      expect(r.points.map((p) => p.rpm), `${asked} asked`).toEqual([180, 800, 6000]);
+    }
   });
 
   it('points the report’s idle and redline rows and its worst-point speeds at entered or round values', () => {
@@ -70,9 +74,10 @@ describe('the sweep grid', () => {
     }
   });
 
-  it('takes 2 to 2000 points and holds a request outside that to the nearest end', () => {
-    expect([MIN_RPM_POINTS, MAX_RPM_POINTS]).toEqual([2, 2000]);
-    expect(rpmPointCount(1)).toBe(2);
+  it('takes 3 to 2000 points and holds a request outside that to the nearest end', () => {
+    expect([MIN_RPM_POINTS, MAX_RPM_POINTS]).toEqual([3, 2000]);
+    expect(rpmPointCount(1)).toBe(3);
+    expect(rpmPointCount(2)).toBe(3);
     expect(rpmPointCount(5000)).toBe(2000);
     expect(rpmPointCount(60.7)).toBe(60);
     expect(rpmPointCount(Number.NaN)).toBe(200);
@@ -81,14 +86,13 @@ describe('the sweep grid', () => {
   it('on any engine and any count: the count asked, rising, cranking first, idle and redline exactly (fast-check)', () => {
     const pos = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
     fc.assert(
-      fc.property(pos(300, 2000), pos(0.05, 0.95), pos(1.2, 12), fc.integer({ min: 2, max: 2000 }), fc.boolean(), (idle, crankFrac, redFactor, n, whole) => {
+      fc.property(pos(300, 2000), pos(0.05, 0.95), pos(1.2, 12), fc.integer({ min: MIN_RPM_POINTS, max: MAX_RPM_POINTS }), fc.boolean(), (idle, crankFrac, redFactor, n, whole) => {
         const round = (x: number) => (whole ? Math.round(x) : x);
         const e: EngineSpec = { ...fourCylinder, idleRpm: round(idle), crankingRpm: round(Math.min(1000, idle * crankFrac)), redlineRpm: round(Math.min(20000, idle * redFactor)) };
         if (!(e.crankingRpm < e.idleRpm && e.idleRpm < e.redlineRpm)) return true;
         const rpm = Array.from(sweepRpm(e, n));
         if (rpm.length !== n || !rising(rpm) || rpm[0] !== e.crankingRpm) return false;
-        if (!rpm.includes(e.redlineRpm)) return false;
-        if (n >= 3 && !rpm.includes(e.idleRpm)) return false;
+        if (!rpm.includes(e.redlineRpm) || !rpm.includes(e.idleRpm)) return false;
         return rpm.every((x) => Number.isFinite(x));
       }),
       { numRuns: 2000 },

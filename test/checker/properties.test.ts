@@ -180,7 +180,7 @@ function supplyLawApplies(s: SetupSpec, lo: SetupReport, hi: SetupReport): boole
 describe('laws of the checker (fast-check)', () => {
   it('gives only finite outputs for every valid engine and setup', () => {
     check(
-      fc.property(engineArb, setupArb, fc.integer({ min: 2, max: 24 }), fc.boolean(), (e, s, n, paschen) => {
+      fc.property(engineArb, setupArb, fc.integer({ min: 3, max: 24 }), fc.boolean(), (e, s, n, paschen) => {
         const r = checkSetup(e, s, undefined, { rpmPoints: n, breakdownModel: paschen ? 'paschen' : 'empirical-air' });
         const bad = allFinite(r);
         if (bad) throw new Error(`not finite at ${bad}`);

@@ -124,18 +124,21 @@ describe('check and its sweep', () => {
     expect(out.rows[0].redline.rpm).toBe(6000);
   });
 
-  it('takes --rpm-points and options.rpmPoints over the grid’s own range, 2 to 2000, and no further', () => {
-    const two = runCli(['check', examplePath, '--sweep', '--rpm-points', '2']);
-    expect(two.code, two.stderr).toBe(0);
-    expect(JSON.parse(two.stdout).existing.points.map((p: { rpm: number }) => p.rpm)).toEqual([180, 6000]);
+  it('takes --rpm-points and options.rpmPoints over the grid’s own range, 3 to 2000, and no further', () => {
+    // The fewest, 3, still holds cranking, the entered idle (750 rpm) and redline exactly.
+    const three = runCli(['check', examplePath, '--sweep', '--rpm-points', '3']);
+    expect(three.code, three.stderr).toBe(0);
+    expect(JSON.parse(three.stdout).existing.points.map((p: { rpm: number }) => p.rpm)).toEqual([180, 750, 6000]);
     // 2000 points are taken (the sweep itself is left out: four setups x 2000 points is megabytes).
     const most = runCli(['check', examplePath, '--rpm-points', '2000']);
     expect(most.code, most.stderr).toBe(0);
-    expect(refused(['check', examplePath, '--rpm-points', '1'])).toContain('--rpm-points: must be a whole number from 2 to 2000, not "1".');
-    expect(refused(['search', join(repoRoot, 'test/fixtures/bin-example.json'), '--rpm-points', '2001'])).toContain('--rpm-points: must be a whole number from 2 to 2000');
+    expect(refused(['check', examplePath, '--rpm-points', '2'])).toContain('--rpm-points: must be a whole number from 3 to 2000, not "2".');
+    expect(refused(['search', join(repoRoot, 'test/fixtures/bin-example.json'), '--rpm-points', '2001'])).toContain('--rpm-points: must be a whole number from 3 to 2000');
     const f = example();
     f.options.rpmPoints = 2001;
     expect(refused(['check', tempFile(f)])).toContain('options.rpmPoints: At most 2000 rpm points.');
+    f.options.rpmPoints = 2;
+    expect(refused(['check', tempFile(f)])).toContain('options.rpmPoints: At least 3 rpm points.');
   });
 
   it('--help names the product', () => {
