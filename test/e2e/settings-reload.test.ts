@@ -37,7 +37,8 @@ describe('reloading the page', () => {
       await page.getByRole('heading', { level: 1, name }).waitFor();
     }
     // The store keeps the last screen for the next start.
-    expect((await api<Settings>(host, 'settings.get', {})).lastScreen).toBe('engines');
+    // (Saved as the screen opens, so a loaded machine may answer the read first: wait for it.)
+    await expect.poll(async () => (await api<Settings>(host, 'settings.get', {})).lastScreen).toBe('engines');
   });
 
   it('weighs the plans that were ticked, remembered per engine', async () => {

@@ -4,7 +4,7 @@
  * to do), and the best combinations the parts bin offers. Unsaved plan edits are never dropped
  * without asking, whether the person leaves the screen, picks another engine or opens another plan.
  */
-import { type ReactNode, useEffect, useMemo, useRef, useState } from 'react';
+import { type ReactNode, useDeferredValue, useEffect, useMemo, useRef, useState } from 'react';
 import type { Engine, Plan, PlanStatus } from '../../../db/schema.js';
 import type { ShelfSuggestion, ShownSetup } from '../../../electron/ipc/channels.js';
 import type { CurrentEngine } from '../../app/current-engine.js';
@@ -187,6 +187,12 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
   // The same array while the answer is the same, so the memoised charts and tables skip the renders
   // that only the rest of the screen needs (a save, a notice, the shelf search running).
   const setups: ShownSetup[] = useMemo(() => (answer ? [answer.existing, ...answer.candidates] : []), [answer]);
+  // The cards and charts are drawn first; the four-speed table and the checks (most of the page)
+  // follow straight after as a deferred render, marked as catching up meanwhile, so a changed
+  // condition shows on the charts without waiting for every table.
+  const shown = useMemo(() => ({ setups, margin: answer?.marginRatio ?? 1.25 }), [setups, answer]);
+  const later = useDeferredValue(shown);
+  const catchingUp = later !== shown;
   const cautions = answer?.cautions ?? (search.value?.engineId === engineId ? search.value.cautions : []);
 
   return (
@@ -310,13 +316,15 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
                 </details>
                 <h2>Across the rev range</h2>
                 <WeighCharts setups={setups} margin={answer.marginRatio} />
-                <h2>At four speeds</h2>
-                <KeyPointsTable setups={setups} margin={answer.marginRatio} />
-                <h2>Check by check</h2>
-                <RuleOverview setups={setups} />
-                {setups.map((s, i) => (
-                  <RuleDetails key={`${s.kind}-${s.planId ?? i}`} setup={s} index={i} />
-                ))}
+                <div className={catchingUp ? 'catching-up' : undefined} aria-busy={catchingUp || undefined}>
+                  <h2>At four speeds</h2>
+                  <KeyPointsTable setups={later.setups} margin={later.margin} />
+                  <h2>Check by check</h2>
+                  <RuleOverview setups={later.setups} />
+                  {later.setups.map((s, i) => (
+                    <RuleDetails key={`${s.kind}-${s.planId ?? i}`} setup={s} index={i} />
+                  ))}
+                </div>
               </>
             ) : null}
           </section>
