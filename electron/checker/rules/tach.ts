@@ -1,10 +1,12 @@
 /**
  * Tachometer compatibility (common practice table):
- * senses                 | points | inductive module | CD
- * coil supply current    | works  | usually works    | usually not; needs an adaptor
- * coil negative pulses   | works  | works            | needs the module's tach output
- * module tach output     | n/a    | works            | works
- * cable from the engine  | works  | works            | works
+ * senses                 | points | magneto      | inductive module | CD
+ * coil supply current    | works  | reads nothing | usually works   | usually not; needs an adaptor
+ * coil negative pulses   | works  | works         | works           | needs the module's tach output
+ * module tach output     | n/a    | n/a           | works           | works
+ * cable from the engine  | works  | works         | works           | works
+ * A magneto makes its own primary current: no battery feed runs to it, so there is no supply
+ * current to sense; its contact breaker's pulses are there as on points.
  * Pulses per revolution are cylinders / 2 on a four-stroke. A multi-spark module gives several
  * pulses per firing below its multi-spark rpm, so a pulse-counting tach over-reads there.
  */
@@ -34,6 +36,9 @@ export const tachRule: Rule = (ctx) => {
     if (multiBelow !== null) return result(id, title, 'caution', [...figures, fig('multi-spark below', multiBelow, 'rpm')], 'The module\'s tach output should give one pulse per firing; check it does below the multi-spark speed.', 'Compare the reading with a hand-held tachometer at idle.');
     return result(id, title, 'pass', figures, why, 'Connect the tachometer to the module\'s tach output.');
   }
+  if (t.senses === 'coil-supply-current' && p.kind === 'magneto') {
+    return result(id, title, 'fail', figures, 'A magneto makes its own current: no battery feed runs to its coil, so a current-sensing tachometer has nothing to read.', 'Drive the tachometer by cable, or fit one that counts the contact breaker\'s pulses.');
+  }
   if (cls === 'cd') {
     if (t.senses === 'coil-supply-current') return result(id, title, 'fail', figures, 'A capacitive-discharge system does not pass pulsed current through the coil feed, so a current-sensing tachometer reads nothing.', 'Fit a tach adaptor made for capacitive discharge.');
     if (!tachOut) return result(id, title, 'fail', figures, 'The coil negative of a CD system carries pulses of hundreds of volts that a conventional tachometer is not built for.', 'Choose a CD module with a tach output, or fit an adaptor.');
@@ -53,6 +58,7 @@ export const tachFails: FailTest = (ctx) => {
   const cls = systemClass(ctx);
   const tachOut = ctx.setup.module?.tachOutput === true;
   if (t.senses === 'module-output') return cls === 'points' || !tachOut;
+  if (t.senses === 'coil-supply-current' && ctx.p.kind === 'magneto') return true;
   if (cls === 'cd') return t.senses === 'coil-supply-current' || !tachOut;
   return false;
 };
