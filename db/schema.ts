@@ -664,6 +664,14 @@ export const settingShapes = {
   firstRunHidden: z.boolean({ error: 'Whether the first-run guide is hidden is true or false.' }),
   /** The screen the person was last on, opened again at the next start. */
   lastScreen: z.enum(settingScreens, { error: `The last screen is one of ${settingScreens.join(', ')}.` }),
+  /** The plan on the bench (the top bar's chip to its wiring sheet), or null for none. */
+  benchPlanId: z
+    .number({ error: 'The plan on the bench is a plan id (a whole number above zero), or null.' })
+    .int('The plan on the bench is a plan id (a whole number above zero), or null.')
+    .positive('The plan on the bench is a plan id (a whole number above zero), or null.')
+    .nullable(),
+  /** The paper the wiring sheet and the comparison are laid out and printed on. */
+  pageSize: z.enum(['A4', 'Letter'], { error: 'The page size is A4 or Letter.' }),
 } as const;
 
 export const settings = z.strictObject(settingShapes);
@@ -691,7 +699,7 @@ export type SettingsPatch = Partial<Settings>;
 export type SettingKey = keyof Settings;
 export const settingKeys = Object.keys(settingShapes) as SettingKey[];
 /** What a key holds until it is first set. */
-export const settingDefaults: Settings = { lengthUnit: 'mm', workingEngineId: null, weighTicks: {}, firstRunHidden: false, lastScreen: 'engines' };
+export const settingDefaults: Settings = { lengthUnit: 'mm', workingEngineId: null, weighTicks: {}, firstRunHidden: false, lastScreen: 'engines', benchPlanId: null, pageSize: 'A4' };
 
 export type AdvancePoint = z.infer<typeof advancePoint>;
 export type ConditionOverrides = z.infer<typeof conditionOverrides>;

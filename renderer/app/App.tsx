@@ -34,7 +34,7 @@ export function App(): ReactNode {
   const [current, setCurrentState] = useState<CurrentEngine | null>(null);
   // Re-render when a setting changes, so a refused write (put back from the store) is explained.
   useSettings();
-  const [bench, setBenchState] = useState<BenchPlan | null>(loadBenchPlan);
+  const [bench, setBenchState] = useState<BenchPlan | null>(null);
   const [pending, setPending] = useState<{ route: Route; what: string } | null>(null);
   const [flash, setFlash] = useState<Flash>(null);
   const [listVersion, setListVersion] = useState(0);
@@ -100,6 +100,8 @@ export function App(): ReactNode {
       if (remembered !== null) setCurrentState({ id: remembered, name: '' });
       if (routeFromHash(window.location.hash) === null) setRoute({ to: s.lastScreen });
       setSettled(true);
+      // The plan on the bench, read again (its name may have changed, or it may be gone).
+      void loadBenchPlan().then((p) => live && setBenchState((b) => b ?? p));
       if (remembered === null) return;
       const engine = await loadCurrentEngine();
       if (live) setCurrentState((c) => (c && c.id === remembered && c.name === '' ? engine : c));
@@ -120,14 +122,6 @@ export function App(): ReactNode {
     if (settingsNow().lastScreen !== screen) void saveSettings({ lastScreen: screen });
   }, [route, settled]);
 
-  // The same for the plan on the bench.
-  useEffect(() => {
-    if (!bench) return;
-    void call('plans.get', { id: bench.id }).then((r) => {
-      if (r.ok && (r.value.name !== bench.name || r.value.engineId !== bench.engineId)) setBench({ id: r.value.id, name: r.value.name, engineId: r.value.engineId });
-      if (!r.ok && r.error.code === 'NOT_FOUND') setBench(null);
-    });
-  }, []);
 
   const active = screenOf(route);
   let screen: ReactNode;

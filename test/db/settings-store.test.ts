@@ -44,16 +44,16 @@ describe('settings', () => {
     const file = storeFile('settings-keep');
     let db = openStore(file);
     let repos = createRepositories(db);
-    expect(repos.settings.get()).toEqual({ lengthUnit: 'mm', workingEngineId: null, weighTicks: {}, firstRunHidden: false, lastScreen: 'engines' });
+    expect(repos.settings.get()).toEqual({ lengthUnit: 'mm', workingEngineId: null, weighTicks: {}, firstRunHidden: false, lastScreen: 'engines', benchPlanId: null, pageSize: 'A4' });
     const answer = repos.settings.set({ lengthUnit: 'inch', workingEngineId: 4, weighTicks: { '4': [9, 7] }, lastScreen: 'combination' });
-    expect(answer).toEqual({ lengthUnit: 'inch', workingEngineId: 4, weighTicks: { '4': [9, 7] }, firstRunHidden: false, lastScreen: 'combination' });
+    expect(answer).toEqual({ lengthUnit: 'inch', workingEngineId: 4, weighTicks: { '4': [9, 7] }, firstRunHidden: false, lastScreen: 'combination', benchPlanId: null, pageSize: 'A4' });
     // A later write of one key leaves the others alone.
-    repos.settings.set({ firstRunHidden: true });
+    repos.settings.set({ firstRunHidden: true, benchPlanId: 12, pageSize: 'Letter' });
     closeStore(db);
 
     db = openStore(file);
     repos = createRepositories(db);
-    expect(repos.settings.get()).toEqual({ lengthUnit: 'inch', workingEngineId: 4, weighTicks: { '4': [9, 7] }, firstRunHidden: true, lastScreen: 'combination' });
+    expect(repos.settings.get()).toEqual({ lengthUnit: 'inch', workingEngineId: 4, weighTicks: { '4': [9, 7] }, firstRunHidden: true, lastScreen: 'combination', benchPlanId: 12, pageSize: 'Letter' });
     repos.settings.set({ workingEngineId: null });
     expect(repos.settings.get().workingEngineId).toBeNull();
     closeStore(db);
@@ -82,6 +82,8 @@ describe('settings', () => {
     ['weighTicks', { weighTicks: { first: [1] } }, 'weighTicks.first', /engine id/],
     ['firstRunHidden', { firstRunHidden: 'yes' }, 'firstRunHidden', /true or false/],
     ['lastScreen', { lastScreen: 'garage' }, 'lastScreen', /engines, parts, combination, sheet, records/],
+    ['benchPlanId', { benchPlanId: -1 }, 'benchPlanId', /plan id/],
+    ['pageSize', { pageSize: 'A3' }, 'pageSize', /A4 or Letter/],
   ])('refuse a bad %s value with a message on that field: %j', (_key, patch, field, message) => {
     const db = openStore(storeFile('settings-bad'));
     const repos = createRepositories(db);

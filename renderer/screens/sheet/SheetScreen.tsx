@@ -14,6 +14,7 @@ import { Confirm } from '../../app/Dialog.js';
 import { useLeaveGuard } from '../../app/leave-guard.js';
 import { Notice, type NoticeKind, NoticeMark } from '../../app/Notice.js';
 import type { Navigate } from '../../app/routes.js';
+import { saveSettings, useSettings } from '../../app/settings.js';
 import { statusWords } from '../../sheet/format.js';
 import type { Band, JudgedReading, SheetStep } from '../../sheet/model.js';
 import { SheetDocument, type PageSize } from '../../sheet/SheetDocument.js';
@@ -176,7 +177,8 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
     return m;
   }, [answer, readingsByQuantity]);
 
-  const [pageSize, setPageSize] = useState<PageSize>(() => (readPageSize() === 'Letter' ? 'Letter' : 'A4'));
+  // The paper is kept in the store's settings (shared with the weighing screen's print).
+  const pageSize: PageSize = useSettings().pageSize;
   const onDirty = useMemo(
     () => (key: string, dirty: boolean) =>
       setDrafts((d) => {
@@ -278,10 +280,7 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
             <PrintBar
               what="The sheet"
               pageSize={pageSize}
-              onPageSize={(s) => {
-                setPageSize(s);
-                savePageSize(s);
-              }}
+              onPageSize={(s) => void saveSettings({ pageSize: s })}
               onResult={(kind, text) => setFlash({ kind, text })}
             />
           </div>
@@ -335,20 +334,4 @@ export function SheetScreen({ planId: routePlanId, current, bench, onEngineChose
       ) : null}
     </section>
   );
-}
-
-const pageKey = 'ignition-planner.pageSize';
-function readPageSize(): string | null {
-  try {
-    return window.localStorage.getItem(pageKey);
-  } catch {
-    return null;
-  }
-}
-function savePageSize(s: PageSize): void {
-  try {
-    window.localStorage.setItem(pageKey, s);
-  } catch {
-    // remembered for this page only
-  }
 }

@@ -14,7 +14,7 @@ import { Notice, type NoticeKind } from '../../app/Notice.js';
 import { PrintBar } from '../../app/PrintBar.js';
 import type { PageSize } from '../../sheet/SheetDocument.js';
 import type { Navigate } from '../../app/routes.js';
-import { saveSettings, settingsNow } from '../../app/settings.js';
+import { saveSettings, settingsNow, useSettings } from '../../app/settings.js';
 import { useGapUnit } from '../../app/units.js';
 import { Cautions } from './Cautions.js';
 import { KeyPointsTable } from './KeyPointsTable.js';
@@ -66,7 +66,7 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
   const [editing, setEditing] = useState({ dirty: false, name: '' });
   const [ask, setAsk] = useState<{ then: () => void } | null>(null);
   const [done, setDone] = useState<string | null>(null);
-  const [pageSize, setPageSize] = useState<PageSize>('A4');
+  const pageSize: PageSize = useSettings().pageSize;
   const [printed, setPrinted] = useState<{ kind: NoticeKind; text: string } | null>(null);
 
   const ready = plansFor === engineId && ticked.for === engineId;
@@ -274,7 +274,7 @@ export function WeighScreen({ current, onEngineChosen, navigate }: Props): React
           <section className="results" aria-labelledby="compare-title" aria-busy={comparison.busy || undefined} data-testid="comparison">
             <div className="results-head">
               <h2 id="compare-title">How they compare</h2>
-              {answer ? <PrintBar what="The comparison" pageSize={pageSize} onPageSize={setPageSize} onResult={(kind, text) => setPrinted({ kind, text })} /> : null}
+              {answer ? <PrintBar what="The comparison" pageSize={pageSize} onPageSize={(s) => void saveSettings({ pageSize: s })} onResult={(kind, text) => setPrinted({ kind, text })} /> : null}
             </div>
             <AmbientField
               key={e.id}
