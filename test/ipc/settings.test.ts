@@ -11,12 +11,13 @@ const { call, ok } = store;
 
 describe('settings over the bridge', () => {
   it('answers the defaults, then what was set, also after the store is opened again', async () => {
-    expect(await ok('settings.get', {})).toEqual({ lengthUnit: 'mm', workingEngineId: null, weighTicks: {}, firstRunHidden: false, lastScreen: 'engines' });
+    expect(await ok('settings.get', {})).toEqual({ lengthUnit: 'mm', workingEngineId: null, weighTicks: {}, firstRunHidden: false, lastScreen: 'engines', benchPlanId: null, pageSize: 'A4' });
     const engines = await ok<Array<{ id: number }>>('engines.list', {});
-    const set = await ok('settings.set', { lengthUnit: 'inch', workingEngineId: engines[0]!.id, lastScreen: 'sheet' });
-    expect(set).toMatchObject({ lengthUnit: 'inch', workingEngineId: engines[0]!.id, lastScreen: 'sheet' });
+    const plans = await ok<Array<{ id: number }>>('plans.list', {});
+    const set = await ok('settings.set', { lengthUnit: 'inch', workingEngineId: engines[0]!.id, lastScreen: 'sheet', benchPlanId: plans[0]!.id, pageSize: 'Letter' });
+    expect(set).toMatchObject({ lengthUnit: 'inch', workingEngineId: engines[0]!.id, lastScreen: 'sheet', benchPlanId: plans[0]!.id, pageSize: 'Letter' });
     store.reopen('browser');
-    expect(await ok('settings.get', {})).toEqual({ lengthUnit: 'inch', workingEngineId: engines[0]!.id, weighTicks: {}, firstRunHidden: false, lastScreen: 'sheet' });
+    expect(await ok('settings.get', {})).toEqual({ lengthUnit: 'inch', workingEngineId: engines[0]!.id, weighTicks: {}, firstRunHidden: false, lastScreen: 'sheet', benchPlanId: plans[0]!.id, pageSize: 'Letter' });
   });
 
   it('refuses unknown keys and bad values naming each, and writes none of that request', async () => {
@@ -26,7 +27,7 @@ describe('settings over the bridge', () => {
     expect(r.error.code).toBe('INVALID_INPUT');
     expect(r.error.fields).toEqual({
       lengthUnit: 'The length unit is "mm" or "inch".',
-      theme: 'There is no setting called “theme”; the settings are lengthUnit, workingEngineId, weighTicks, firstRunHidden, lastScreen.',
+      theme: 'There is no setting called “theme”; the settings are lengthUnit, workingEngineId, weighTicks, firstRunHidden, lastScreen, benchPlanId, pageSize.',
     });
     expect((await ok<{ firstRunHidden: boolean }>('settings.get', {})).firstRunHidden).toBe(false);
     // The get takes nothing: an unknown key there is refused too.
