@@ -4,7 +4,7 @@
  * rules with their figures, and the sweep downsampled for charts. Pure functions, no store.
  */
 import type { ConditionName, Figure, OperatingPoint, ResolvedConditions, RuleResult, SetupReport } from '../checker/types.js';
-import { conditionUnits } from '../checker/conditions.js';
+import { conditionUnits, secondaryCeilingDefaultV } from '../checker/conditions.js';
 import type { ShownFigure, ShownPoint, ShownRule, ShownSeries, ShownSetup } from './check-shapes.js';
 
 /** How many points a chart gets; the checker's own sweep is finer. */
@@ -155,6 +155,17 @@ function displayUnit(value: number, unit: string): { value: number; unit: string
 export function shownConditions(c: ResolvedConditions): ShownFigure[] {
   return (Object.keys(conditionWords) as ConditionName[]).map((key) => {
     const d = displayUnit(c[key].value, conditionUnits[key]);
-    return { name: conditionWords[key], value: tidy(d.value, 4), unit: d.unit, measured: c[key].provenance === 'measured', source: c[key].provenance };
+    return { name: conditionWords[key], value: tidy(d.value, 4), unit: d.unit, measured: c[key].provenance === 'measured', source: sourceOf(key, c) };
   });
+}
+
+/**
+ * Where a condition came from. The secondary ceiling's default is the engine-level one; a setup
+ * with a capacitive-discharge unit takes its own kind's default (checker/conditions.ts), which the
+ * list of conditions must say rather than show 30 kV beside a CD plan as if it applied.
+ */
+function sourceOf(key: ConditionName, c: ResolvedConditions): string {
+  const p = c[key].provenance;
+  if (key !== 'secondaryCeilingV' || !p.startsWith('default')) return p;
+  return `${p}; ${secondaryCeilingDefaultV('capacitive-discharge') / 1000} kV with a capacitive-discharge unit`;
 }

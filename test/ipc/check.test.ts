@@ -219,6 +219,8 @@ describe('check.plans refusals', () => {
     await ok('engines.update', { id, expectedUpdatedAt: updatedAt, engine: { ...rest, conditions: cold } });
     const saved: ComparisonAnswer = await ok('check.plans', { engineId: engine.id, planIds });
     expect(sent).toEqual(saved);
+    // The ceiling's default says that a capacitive-discharge unit takes 40 kV (from memory), not the 30 kV shown.
+    expect(sent.conditions.find((c) => /secondary/i.test(c.name))!.source).toMatch(/40 kV with a capacitive-discharge unit/);
     // And the air temperature is what moved the figures (a cold battery cranks lower; common practice).
     const warm: ComparisonAnswer = await ok('check.plans', { engineId: engine.id, planIds, conditions: { ...engine.conditions, ambientC: 20 } });
     const supply = (a: ComparisonAnswer): number => a.conditions.find((c) => /cranking/i.test(c.name) && c.unit === 'V')!.value;
