@@ -31,13 +31,14 @@ export function inductorEnergyJ(inductanceH: number, currentA: number): number {
  * A current limit caps the ramp: after it is reached the current is held at the limit.
  */
 export function meanSquareCurrentA2(finalA: number, tauS: number, dwellS: number, periodS: number, limitA: number): number {
-  return meanSquareGivenLimitTimeA2(finalA, tauS, dwellS, periodS, limitA, limitA < finalA && tauS > 0 ? timeToReachS(finalA, tauS, limitA) : Infinity);
+  return meanSquareGivenLimitTimeA2(finalA, tauS, dwellS, periodS, limitA, timeToReachS(finalA, tauS, limitA));
 }
 
 /**
- * The same with the time to reach the limit already known (`timeToReachS`). Up to the limit
- * 1 - e^(-t_l/tau) is I_lim / I_final by definition, and 1 - e^(-2x) = (1 - e^(-x))(2 - (1 - e^(-x))),
- * so at most one exponential is needed (the ballast solution calls this at every rpm).
+ * The same with the time to reach the limit already known (`timeToReachS`: Infinity when the limit
+ * is at or above the final current, so it is never reached). Up to the limit 1 - e^(-t_l/tau) is
+ * I_lim / I_final by definition, and 1 - e^(-2x) = (1 - e^(-x))(2 - (1 - e^(-x))), so at most one
+ * exponential is needed (the ballast solution calls this at every rpm).
  */
 export function meanSquareGivenLimitTimeA2(finalA: number, tauS: number, dwellS: number, periodS: number, limitA: number, toLimitS: number): number {
   return meanSquareWithChargeA2(finalA, tauS, dwellS, periodS, limitA, toLimitS, NaN);
@@ -46,27 +47,23 @@ export function meanSquareGivenLimitTimeA2(finalA: number, tauS: number, dwellS:
 /**
  * The same, given also 1 - e^(-t_d/tau) for the whole dwell when the caller has it already (NaN
  * when not): the ballast solution forms it for the current at break and should not pay for it twice.
+ * A dwell longer than the period charges for the whole period.
  */
 export function meanSquareWithChargeA2(finalA: number, tauS: number, dwellS: number, periodS: number, limitA: number, toLimitS: number, chargedFraction: number): number {
   if (!(periodS > 0) || !(dwellS > 0) || !(finalA > 0)) return 0;
   const td = Math.min(dwellS, periodS);
+  const held = Math.min(limitA, finalA);
+  // Without inductance the current stands at its final value (or the limit) for the whole dwell.
+  if (!(tauS > 0)) return (held * held * td) / periodS;
   let ramp = td;
-  let held = 0;
-  let limited = false;
-  if (limitA < finalA && tauS > 0 && toLimitS < td) {
+  let e1: number;
+  if (toLimitS < td) {
     ramp = toLimitS;
-    held = td - toLimitS;
-    limited = true;
-  }
-  let integral: number;
-  if (tauS > 0) {
-    const e1 = limited ? limitA / finalA : ramp === dwellS && chargedFraction === chargedFraction ? chargedFraction : -Math.expm1(-ramp / tauS);
-    const e2 = e1 * (2 - e1);
-    integral = finalA * finalA * Math.max(0, ramp - 2 * tauS * e1 + 0.5 * tauS * e2);
+    e1 = limitA / finalA;
   } else {
-    integral = finalA * finalA * ramp;
+    e1 = td === dwellS && chargedFraction === chargedFraction ? chargedFraction : -Math.expm1(-td / tauS);
   }
-  const lim = Math.min(limitA, finalA);
-  integral += lim * lim * held;
-  return integral / periodS;
+  const e2 = e1 * (2 - e1);
+  const rampIntegral = finalA * finalA * Math.max(0, ramp - 2 * tauS * e1 + 0.5 * tauS * e2);
+  return (rampIntegral + held * held * (td - ramp)) / periodS;
 }
