@@ -193,6 +193,16 @@ export function gridsFor(engine: EngineSpec, c: ResolvedConditions, rpmPoints: n
   return grids;
 }
 
+/**
+ * Forget the remembered grids, so the next `gridsFor` builds afresh. The mutation run calls it
+ * before each test file (test/mutation/forget-grids.ts): a grid built under one planted bug must
+ * not answer a check run under the next. The required-voltage and carry-weight caches are keyed by
+ * the grids, so they start afresh with them.
+ */
+export function forgetLastGrids(): void {
+  lastGrids = null;
+}
+
 export function buildGrids(engine: EngineSpec, c: ResolvedConditions, rpmPoints: number): EngineGrids {
   const n = rpmPointCount(rpmPoints);
   const n1 = c.polytropicIndex.value;

@@ -7,7 +7,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { checkSetup, compareSetups } from '../../electron/checker/index.js';
-import { MAX_RPM_POINTS, MIN_RPM_POINTS, rpmPointCount, sweepRpm } from '../../electron/checker/grid.js';
+import { forgetLastGrids, gridsFor, MAX_RPM_POINTS, MIN_RPM_POINTS, rpmPointCount, sweepRpm } from '../../electron/checker/grid.js';
+import { resolveConditions } from '../../electron/checker/conditions.js';
 import type { EngineSpec } from '../../electron/checker/types.js';
 import { fourCylinder, moduleSetup, module, pointsSetup } from './fixtures.js';
 
@@ -97,5 +98,19 @@ describe('the sweep grid', () => {
       }),
       { numRuns: 2000 },
     );
+  });
+});
+
+describe('the remembered grids', () => {
+  it('answers the same engine and conditions with the same grids, and builds afresh once forgotten or when a value changes', () => {
+    const c = resolveConditions(fourCylinder);
+    const first = gridsFor(fourCylinder, c, 12);
+    expect(gridsFor(fourCylinder, c, 12)).toBe(first);
+    forgetLastGrids();
+    const again = gridsFor(fourCylinder, c, 12);
+    expect(again).not.toBe(first);
+    // Built afresh, the grids hold the same rpm points.
+    expect([...again.sweep.rpm]).toEqual([...first.sweep.rpm]);
+    expect(gridsFor({ ...fourCylinder, idleRpm: 850 }, c, 12)).not.toBe(again);
   });
 });

@@ -33,10 +33,13 @@ export default defineConfig({
     ],
     env: { CI: 'true' },
     // MUTATE_NO_ISOLATE=1 shares one module registry between test files and runs (about three times
-    // faster on this machine). Only for files without module-level caches: grid.ts (the last
-    // grids), session.ts (required voltages) and sweep.ts (carry weights) keep results between
-    // calls, which a mutant could leave behind for the next run; leave it off when mutating them.
+    // faster on this machine). grid.ts (the last grids), session.ts (required voltages) and
+    // sweep.ts (carry weights) keep results between calls, which a mutant could leave behind for
+    // the next run.
+    // With it, forget-grids.ts runs before each test file and drops the remembered grids (the other two
+    // caches are keyed by them), so grid.ts, session.ts and sweep.ts can be mutated that way too.
     isolate: process.env.MUTATE_NO_ISOLATE !== '1',
+    setupFiles: process.env.MUTATE_NO_ISOLATE === '1' ? ['test/mutation/forget-grids.ts'] : [],
     testTimeout: 60_000,
     hookTimeout: 120_000,
     pool: 'forks',
