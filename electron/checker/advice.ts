@@ -34,13 +34,11 @@ const RANK = { fail: 0, caution: 1, pass: 2 } as const;
 
 /** The merged, ordered list of what to do for one setup's rule results (pass results add nothing). */
 export function whatToDo(rules: readonly RuleResult[]): string[] {
-  const order = rules
-    .map((r, i) => ({ r, i }))
-    .filter(({ r }) => r.verdict !== 'pass')
-    .sort((x, y) => RANK[x.r.verdict] - RANK[y.r.verdict] || x.i - y.i);
+  // Array.prototype.sort is stable (ES2019), so rules of one verdict keep the report's order.
+  const order = rules.filter((r) => r.verdict !== 'pass').sort((x, y) => RANK[x.verdict] - RANK[y.verdict]);
   const out: string[] = [];
   const taken: Array<{ title: string; intents: readonly Intent[] }> = [];
-  for (const { r } of order) {
+  for (const r of order) {
     const intents = r.intents ?? [];
     const clash = taken.find((t) => contradicts(t.intents, intents));
     if (clash) {

@@ -26,7 +26,8 @@ for (const [file, { mutants, source }] of Object.entries(incremental.files).sort
     else if (m.status === 'Survived' || m.status === 'NoCoverage') {
       survived++;
       const line = m.location.start.line;
-      left.push(`  ${file}:${line} [${m.status}] ${m.mutatorName}: ${JSON.stringify(m.replacement)}  |  ${lines[line - 1].trim().slice(0, 100)}`);
+      const column = m.location.start.column;
+      left.push(`  ${file}:${line}:${column} [${m.status}] ${m.mutatorName}: ${JSON.stringify(m.replacement)}  |  ${lines[line - 1].trim().slice(0, 100)}`);
     }
   }
   total.killed += killed;
