@@ -196,11 +196,16 @@ export const sparkRate: Rule = (ctx) => {
   const redlineRate = redlineRateHz(ctx);
   const figures = [fig('spark rate at redline', redlineRate, 'Hz')];
   const m = setup.module;
+  // Points float: the follower leaves the cam before redline. A transistor-points unit keeps the
+  // points as its trigger (the transistor only carries the coil current), so it floats the same.
+  const float = engine.pointsFloatRpm;
+  const floats = (ctx.p.kind === 'points' || ctx.p.kind === 'transistor-points') && float !== null && float < engine.redlineRpm;
+  const floatWhy = 'The points follower leaves the cam before redline, so the dwell and the spark collapse at the top.';
+  const floatAction = 'Stronger points springs, or an electronic trigger, cure points float.';
   if (!isModuleKind(ctx) || !m) {
-    const float = engine.pointsFloatRpm;
-    if (ctx.p.kind === 'points' && float !== null && float < engine.redlineRpm) {
+    if (floats) {
       figures.push(fig('points float from', float, 'rpm'));
-      return result(id, title, 'caution', figures, 'The points follower leaves the cam before redline, so the dwell and the spark collapse at the top.', 'Stronger points springs, or an electronic trigger, cure points float.');
+      return result(id, title, 'caution', figures, floatWhy, floatAction);
     }
     return result(id, title, 'pass', figures, 'Points have no electronic spark-rate limit.', 'Nothing to do.');
   }
@@ -208,6 +213,10 @@ export const sparkRate: Rule = (ctx) => {
   void grid; void redlineIndex;
   const why = 'Above its highest spark rate a module skips sparks, which feels like hitting a rev limiter.';
   if (redlineRate > m.maxSparkRateHz) return result(id, title, 'fail', figures, `${why} Redline needs ${fmt(redlineRate, 0)} sparks a second against a limit of ${fmt(m.maxSparkRateHz, 0)}.`, 'Choose a module rated for this engine\'s redline.');
+  if (floats) {
+    figures.push(fig('points float from', float, 'rpm'));
+    return result(id, title, 'caution', figures, `The module still takes its timing from the points. ${floatWhy}`, floatAction);
+  }
   if (redlineRate > 0.9 * m.maxSparkRateHz) return result(id, title, 'caution', figures, `${why} Redline comes within 10 % of the limit.`, 'Keep clear of redline, or choose a faster module.');
   return result(id, title, 'pass', figures, why, 'Nothing to do.');
 };
