@@ -139,11 +139,8 @@ export function secondaryCeilingDefaultV(kind: SwitchingKind): number {
 export function secondaryCeilingFor(c: ResolvedConditions, kind: SwitchingKind): Sourced {
   const given = c.secondaryCeilingV;
   if (!given.provenance.startsWith('default')) return given;
-  return kind === 'capacitive-discharge' ? CEILING_CD : CEILING_INDUCTIVE;
+  return d(secondaryCeilingDefaultV(kind), MEMORY);
 }
-// The two defaults as shared values (a search prepares thousands of setups).
-const CEILING_INDUCTIVE: Readonly<Sourced> = Object.freeze(d(secondaryCeilingDefaultV('points'), MEMORY));
-const CEILING_CD: Readonly<Sourced> = Object.freeze(d(secondaryCeilingDefaultV('capacitive-discharge'), MEMORY));
 
 /**
  * Magnetic coupling of primary and secondary in a closed-iron canister coil: oil-filled canister
