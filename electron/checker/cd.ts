@@ -116,8 +116,9 @@ export function cdRiseTimeS(capacitanceF: number, n: number, secondaryCapacitanc
   const w0 = 1 / Math.sqrt(loop.leakageH * series);
   const zeta = cdTransferDampingRatio(capacitanceF, n, secondaryCapacitanceF, loop);
   if (zeta < 1) return Math.PI / (w0 * Math.sqrt(1 - zeta * zeta));
-  const slow = w0 * (zeta - Math.sqrt(zeta * zeta - 1));
-  return slow > 0 ? 3 / slow : 0;
+  // zeta - sqrt(zeta^2 - 1) written as 1 / (zeta + sqrt(zeta^2 - 1)) (the two roots multiply to
+  // omega_0^2): the difference loses every digit at large zeta, the sum none.
+  return (3 * (zeta + Math.sqrt(zeta * zeta - 1))) / w0;
 }
 
 /**
