@@ -2,6 +2,7 @@
  * Invented engines and parts for the checker tests (no real products).
  */
 import type { BallastSpec, CoilSpec, EngineSpec, ModuleSpec, SetupSpec } from '../../electron/checker/index.js';
+import type { Baseline } from '../../electron/checker/rules/context.js';
 
 export const fourCylinder: EngineSpec = {
   name: 'Test four',
@@ -107,4 +108,18 @@ export function pointsSetup(over: Partial<SetupSpec> = {}): SetupSpec {
 
 export function moduleSetup(m: ModuleSpec, over: Partial<SetupSpec> = {}): SetupSpec {
   return pointsSetup({ label: m.name, switching: m.moduleType, module: m, condenserF: null, ...over });
+}
+
+/**
+ * An existing setup that delivers the same spark energy and duration at each of `n` points
+ * (stored energy 50 mJ, worst reserve 2): the rules' baseline, for tests of the relative limits.
+ */
+export function uniformBaseline(energyJ: number, durationS: number, n: number): Baseline {
+  return {
+    label: 'the existing setup',
+    energyJ: new Float64Array(n).fill(0.05),
+    sparkEnergyJ: new Float64Array(n).fill(energyJ),
+    durationS: new Float64Array(n).fill(durationS),
+    worstRatio: 2,
+  };
 }

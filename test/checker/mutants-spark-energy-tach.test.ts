@@ -15,7 +15,7 @@ import { DELIVERED_ENERGY_CAUTION_J, DELIVERED_ENERGY_FAIL_J, SPARK_DURATION_CAU
 import { tachFails, tachRule } from '../../electron/checker/rules/tach.js';
 import { contradicts, CONTRADICTIONS, whatToDo } from '../../electron/checker/advice.js';
 import type { EngineSpec, Intent, RuleResult, SetupSpec, TachSenses } from '../../electron/checker/index.js';
-import { cdModule, coil, fourCylinder, ironBallast, module, moduleSetup, pointsSetup, ballastCoil } from './fixtures.js';
+import { cdModule, coil, fourCylinder, ironBallast, module, moduleSetup, pointsSetup, ballastCoil, uniformBaseline } from './fixtures.js';
 
 function ctxOf(setup: SetupSpec, engine: EngineSpec = fourCylinder): RuleContext {
   return analyse(createSession(engine, undefined, { rpmPoints: 24 }), setup, null, true).ctx;
@@ -135,13 +135,7 @@ describe('spark duration (caution below 0.5 ms, from memory) and the advice on a
 });
 
 describe('against the existing setup (caution under 75 % of its energy or 50 % of its duration, our limits)', () => {
-  const baseline = (energyJ: number, durationS: number, n = cdAt(3e-6, 110).ws.n): Baseline => ({
-    label: 'the existing setup',
-    energyJ: new Float64Array(n).fill(0.05),
-    sparkEnergyJ: new Float64Array(n).fill(energyJ),
-    durationS: new Float64Array(n).fill(durationS),
-    worstRatio: 2,
-  });
+  const baseline = (energyJ: number, durationS: number, n = cdAt(3e-6, 110).ws.n): Baseline => uniformBaseline(energyJ, durationS, n);
   it('passes 3 mJ against 4 mJ (exactly 75 %) and cautions against a little more', () => {
     expect(BASELINE_ENERGY_CAUTION_RATIO).toBe(0.75);
     expect(3e-3 / 4e-3).toBe(0.75);

@@ -21,7 +21,7 @@ import { analyse, createSession } from '../../electron/checker/session.js';
 import type { Baseline, RuleContext } from '../../electron/checker/rules/context.js';
 import { offTime, plugGap, sparkEnergy, sparkRate, sparkRateFails, voltageReserve } from '../../electron/checker/rules/spark.js';
 import type { EngineSpec, PlugGapSuggestion, RuleResult, SetupSpec } from '../../electron/checker/index.js';
-import { cdModule, coil, fourCylinder, ironBallast, module, moduleSetup, pointsSetup } from './fixtures.js';
+import { cdModule, coil, fourCylinder, ironBallast, module, moduleSetup, pointsSetup, uniformBaseline } from './fixtures.js';
 
 function ctxOf(setup: SetupSpec, engine: EngineSpec = fourCylinder): RuleContext {
   return analyse(createSession(engine, undefined, { rpmPoints: 24 }), setup, null, true).ctx;
@@ -192,13 +192,7 @@ describe('the advice on a weak spark in the words of an inductive system', () =>
 });
 
 describe('against the existing setup: the figures, the worst point and the sentences', () => {
-  const baseline = (energyJ: number, durationS: number, n: number): Baseline => ({
-    label: 'the existing setup',
-    energyJ: new Float64Array(n).fill(0.05),
-    sparkEnergyJ: new Float64Array(n).fill(energyJ),
-    durationS: new Float64Array(n).fill(durationS),
-    worstRatio: 2,
-  });
+  const baseline = uniformBaseline;
   it('names the worst point and gives the percentages in figures and words', () => {
     // The candidate delivers 0.5 x 10 x 2 x 3 uF x 100 V = 3 mJ for 1 ms everywhere (no reason of its own).
     // The existing setup: 6 mJ and 2.5 ms at idle (50 % and 40 %), 3.2 mJ and 1.2 ms elsewhere
