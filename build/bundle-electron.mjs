@@ -12,7 +12,12 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
-const outDir = path.join(root, 'dist-electron');
+// `--cli-only --out <dir>`: the command line alone, into <dir> (the command-line tests run the
+// bundle they build this way, so they test what ships and start in a fraction of tsx's time).
+const argv = process.argv.slice(2);
+const cliOnly = argv.includes('--cli-only');
+const outAt = argv.indexOf('--out');
+const outDir = outAt >= 0 && argv[outAt + 1] ? path.resolve(argv[outAt + 1]) : path.join(root, 'dist-electron');
 const at = (p) => path.join(root, p);
 
 // ESM output cannot call require(); some bundled CommonJS code does, so give it one.
@@ -28,10 +33,10 @@ const common = {
   absWorkingDir: root,
 };
 
-rmSync(outDir, { recursive: true, force: true });
+if (!cliOnly) rmSync(outDir, { recursive: true, force: true });
 mkdirSync(outDir, { recursive: true });
 
-const jobs = [
+const jobs = cliOnly ? [] : [
   build({
     ...common,
     entryPoints: [at('electron/main.ts')],
