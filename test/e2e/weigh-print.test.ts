@@ -20,14 +20,21 @@ describe('the weighing screen in print', () => {
     const plans = await api<Array<{ id: number }>>(host, 'plans.list', { engineId: saloon.id });
     await openScreen(page, 'Weigh a combination');
     await page.getByLabel('Engine', { exact: true }).selectOption({ label: SALOON });
-    await page.getByTestId('setup-card-1').waitFor();
+    const truth = await api<ComparisonAnswer>(host, 'check.plans', { engineId: saloon.id, planIds: plans.map((p) => p.id) });
+    // Print once the screen shows every setup with every rule's reasons (folded, but in the page),
+    // as a restorer would: on a loaded machine the cards can arrive a moment apart.
+    await page.getByTestId(`setup-card-${truth.candidates.length}`).waitFor();
+    const wanted = [truth.existing, ...truth.candidates].flatMap((setup) => setup.rules.map((rule) => squash(rule.why)));
+    await expect.poll(async () => {
+      const shown = squash((await page.locator('body').textContent()) ?? '');
+      return wanted.filter((w) => !shown.includes(w)).length;
+    }).toBe(0);
 
     const pdf = path.join(outputDir, 'weigh-print.pdf');
     await page.pdf({ path: pdf, format: 'A4' });
     execFileSync('pdftoppm', ['-r', '60', '-png', pdf, path.join(outputDir, 'weigh-print')]);
     const text = squash(execFileSync('pdftotext', ['-enc', 'UTF-8', pdf, '-'], { encoding: 'utf8' }));
 
-    const truth = await api<ComparisonAnswer>(host, 'check.plans', { engineId: saloon.id, planIds: plans.map((p) => p.id) });
     const d = new Date();
     const today = `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
     expect(text).toContain(squash(`Engine: ${SALOON}`));
