@@ -139,7 +139,8 @@ export function sweepRpm(engine: EngineSpec, n: number): Float64Array {
     return out;
   }
   fillEven(out, 0, n, crank, top);
-  // Put each anchor on its nearest point, keeping room for the anchors above it and order below it.
+  // Put each anchor on its nearest point, keeping room for the anchors above it and order below it
+  // (an anchor exactly halfway between two points takes the lower one, leaving the upper for later).
   const fixed: number[] = [0];
   anchors.forEach((a, k) => {
     const lowest = fixed[fixed.length - 1]! + 1;
