@@ -223,7 +223,7 @@ function cdPoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankingOnly: 
  * worked out once per grid and the sweep's ballast start costs three products a point.
  */
 const carryWeights = new WeakMap<RpmGrid, Float64Array>();
-function carryWeightsOf(grid: RpmGrid): Float64Array {
+export function carryWeightsOf(grid: RpmGrid): Float64Array {
   let w = carryWeights.get(grid);
   if (!w) {
     w = new Float64Array(3 * grid.n);
@@ -240,6 +240,20 @@ function carryWeightsOf(grid: RpmGrid): Float64Array {
     carryWeights.set(grid, w);
   }
   return w;
+}
+
+/**
+ * Where the ballast solution at grid point `i` (rpm `x0`) starts: the answers `k1`, `k2`, `k3` at
+ * the last three points solved (rpm `x1`, `x2` for the first two; NaN where there is none yet)
+ * carried on to this rpm. The parabola through three (the grid's `weights`, carryWeightsOf) when
+ * they are the three points just before this one (`consecutive`), else the line through the last
+ * two, the last answer alone, or `startK` before any.
+ */
+export function carriedStartK(weights: Float64Array, i: number, k1: number, k2: number, k3: number, consecutive: boolean, x0: number, x1: number, x2: number, startK: number): number {
+  if (k1 !== k1) return startK;
+  if (k2 !== k2) return k1;
+  if (k3 !== k3 || !consecutive) return k1 + ((k1 - k2) * (x0 - x1)) / (x1 - x2);
+  return weights[3 * i]! * k1 + weights[3 * i + 1]! * k2 + weights[3 * i + 2]! * k3;
 }
 
 /** Supply cases of the inductive loop: values that hold for every point of one case are worked out once. */
@@ -349,11 +363,7 @@ function inductivePoints(p: PreparedSetup, grid: RpmGrid, ws: Workspace, crankin
       ballast.rpm = rpm;
       // Start from the neighbours' answers carried on to this rpm (through the last three, the
       // last two, or the last one alone), so the solution usually settles at its first step.
-      const guess =
-        prevK !== prevK ? p.ballastHotK
-        : prevPrevK !== prevPrevK ? prevK
-        : prev3K !== prev3K || lastSolved !== i - 1 ? prevK + ((prevK - prevPrevK) * (rpm - rpm1)) / (rpm1 - rpm2)
-        : weights![3 * i]! * prevK + weights![3 * i + 1]! * prevPrevK + weights![3 * i + 2]! * prev3K;
+      const guess = carriedStartK(weights!, i, prevK, prevPrevK, prev3K, lastSolved === i - 1, rpm, rpm1, rpm2, p.ballastHotK);
       ballastK = ballast.settle(guess, prevSlope);
       prev3K = prevPrevK;
       prevPrevK = prevK;

@@ -1,0 +1,83 @@
+/**
+ * Where the sweep starts each running point's ballast solution (sweep.ts): the answers at the points
+ * before it carried on to this rpm. The parabola through three points, in Lagrange's form
+ * L_j(x) = prod_{m != j} (x - x_m) / (x_j - x_m) (Burden & Faires, Numerical Analysis, sec. 3.1),
+ * reproduces any quadratic exactly, and the line through two reproduces any straight line; both
+ * facts are used here with quadratics and lines chosen in the test, so every expected value is
+ * the chosen function at the new rpm. Written against the mutation-testing survivors.
+ */
+import { describe, expect, it } from 'vitest';
+import { carriedStartK, carryWeightsOf } from '../../electron/checker/sweep.js';
+import type { RpmGrid } from '../../electron/checker/grid.js';
+
+/** A hand-made grid with uneven rpm steps: carryWeightsOf reads only `n` and `rpm`. */
+function gridOf(rpm: readonly number[]): RpmGrid {
+  const n = rpm.length;
+  const z = (): Float64Array => new Float64Array(n);
+  return {
+    n, rpm: Float64Array.from(rpm), cranking: new Uint8Array(n), resting: new Uint8Array(n), sparkRateHz: z(), periodS: z(),
+    sparkAngleDegBtdc: z(), pressurePa: z(), temperatureK: z(), densityFactor: z(),
+  };
+}
+const RPM = [180, 800, 1500, 2700, 4000, 5300, 6000, 6600];
+const G = gridOf(RPM);
+/** A smooth, curved temperature against rpm (any quadratic will do). */
+const quad = (x: number): number => 400 + 0.09 * x - 6e-6 * x * x;
+const line = (x: number): number => 350 + 0.05 * x;
+
+describe('the carry weights: the Lagrange basis of the three points before each point', () => {
+  const w = carryWeightsOf(G);
+  it('has three per point, zero for the first three (no three points before them)', () => {
+    expect(w.length).toBe(3 * RPM.length);
+    for (let k = 0; k < 9; k++) expect(w[k]).toBe(0);
+  });
+  for (let i = 3; i < RPM.length; i++) {
+    it(`at point ${i} (${RPM[i]} rpm) each weight is L_j(x_0) worked here, and they carry a quadratic exactly`, () => {
+      const [x0, x1, x2, x3] = [RPM[i]!, RPM[i - 1]!, RPM[i - 2]!, RPM[i - 3]!];
+      const L1 = ((x0 - x2) * (x0 - x3)) / ((x1 - x2) * (x1 - x3));
+      const L2 = ((x0 - x1) * (x0 - x3)) / ((x2 - x1) * (x2 - x3));
+      const L3 = ((x0 - x1) * (x0 - x2)) / ((x3 - x1) * (x3 - x2));
+      expect(w[3 * i]).toBeCloseTo(L1, 12);
+      expect(w[3 * i + 1]).toBeCloseTo(L2, 12);
+      expect(w[3 * i + 2]).toBeCloseTo(L3, 12);
+      // The basis sums to 1 (a constant is carried unchanged).
+      expect(w[3 * i]! + w[3 * i + 1]! + w[3 * i + 2]!).toBeCloseTo(1, 12);
+      expect(w[3 * i]! * quad(x1) + w[3 * i + 1]! * quad(x2) + w[3 * i + 2]! * quad(x3)).toBeCloseTo(quad(x0), 9);
+    });
+  }
+  it('is worked out once per grid (the same array the next time)', () => {
+    expect(carryWeightsOf(G)).toBe(w);
+    expect(carryWeightsOf(gridOf(RPM))).not.toBe(w);
+  });
+});
+
+describe('the start of each point\'s solution', () => {
+  const w = carryWeightsOf(G);
+  const NaN_ = Number.NaN;
+  it('before any answer: the hot idle value given', () => {
+    expect(carriedStartK(w, 5, NaN_, NaN_, NaN_, false, 5300, 4000, 2700, 612.5)).toBe(612.5);
+    expect(carriedStartK(w, 5, NaN_, 500, 480, true, 5300, 4000, 2700, 612.5)).toBe(612.5);
+  });
+  it('after one answer: that answer', () => {
+    expect(carriedStartK(w, 2, 555, NaN_, NaN_, true, 1500, 800, NaN_, 612.5)).toBe(555);
+    expect(carriedStartK(w, 2, 555, NaN_, 470, true, 1500, 800, NaN_, 612.5)).toBe(555);
+  });
+  it('after two, or three not just before this point: the line through the last two, exact for a straight line', () => {
+    // Points 1 and 2 solved, now point 3.
+    expect(carriedStartK(w, 3, line(1500), line(800), NaN_, true, 2700, 1500, 800, 612.5)).toBeCloseTo(line(2700), 9);
+    // Three answers, but a point was skipped since (not consecutive): the line, not the parabola.
+    const k = carriedStartK(w, 6, quad(4000), quad(2700), quad(1500), false, 6000, 4000, 2700, 612.5);
+    const byLine = quad(4000) + ((quad(4000) - quad(2700)) * (6000 - 4000)) / (4000 - 2700);
+    expect(k).toBeCloseTo(byLine, 9);
+    expect(Math.abs(k - quad(6000))).toBeGreaterThan(1);
+  });
+  for (let i = 3; i < RPM.length; i++) {
+    it(`after three just before point ${i}: the parabola through them, exact for a quadratic`, () => {
+      const k = carriedStartK(w, i, quad(RPM[i - 1]!), quad(RPM[i - 2]!), quad(RPM[i - 3]!), true, RPM[i]!, RPM[i - 1]!, RPM[i - 2]!, 612.5);
+      expect(k).toBeCloseTo(quad(RPM[i]!), 9);
+      // ... where the line through the last two misses the curve.
+      const byLine = quad(RPM[i - 1]!) + ((quad(RPM[i - 1]!) - quad(RPM[i - 2]!)) * (RPM[i]! - RPM[i - 1]!)) / (RPM[i - 1]! - RPM[i - 2]!);
+      expect(Math.abs(byLine - quad(RPM[i]!))).toBeGreaterThan(0.1);
+    });
+  }
+});
