@@ -127,6 +127,13 @@ describe('the largest whole 0.01 mm step that meets, by bisection', () => {
     expect(largestMeetingGapM(0.7415e-3, 0.7465e-3, u.meets, 0.7415e-3)).toBe(0.7415e-3);
     expect(u.calls).toEqual([]);
   });
+  it('the first whole step above a low end that is not on a step, when it meets and the next does not', () => {
+    // lo 0.7415 mm, edge 0.7551 mm: 0.75 mm meets, 0.76 mm does not; the answer is 0.75 mm, not lo.
+    const t = threshold(0.7551e-3);
+    expect(largestMeetingGapM(0.7415e-3, 1.1e-3, t.meets, Number.NaN)).toBe(0.75e-3);
+    const u = threshold(0.7551e-3);
+    expect(largestMeetingGapM(0.7415e-3, 1.1e-3, u.meets, 0.7551e-3)).toBe(0.75e-3);
+  });
   it('a low end on a whole step counts as a step', () => {
     const t = threshold(0.30999e-3);
     expect(largestMeetingGapM(LO, HI, t.meets, Number.NaN)).toBe(0.3e-3);
