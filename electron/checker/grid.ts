@@ -123,9 +123,12 @@ function fillEven(out: Float64Array, from: number, count: number, lo: number, hi
  * The sweep's rpm: `n` points, cranking first, then evenly from cranking to 110 % of redline on
  * round values (whole rpm wherever the step allows), with the entered idle and redline exactly
  * in place of their nearest points. With n = 3 (the fewest a check asks for, MIN_RPM_POINTS) the
- * points are cranking, idle and redline; called directly with n = 2, cranking and redline.
+ * points are cranking, idle and redline; called directly with n = 2, cranking and redline; with
+ * n = 1, cranking alone; with none, none.
  */
 export function sweepRpm(engine: EngineSpec, n: number): Float64Array {
+  // No points asked for: none (the anchor trimming below would never end).
+  if (n < 1) return new Float64Array(0);
   const out = new Float64Array(n);
   const crank = Math.max(1, engine.crankingRpm);
   const rawTop = Math.max(crank * 1.01, engine.redlineRpm * 1.1);

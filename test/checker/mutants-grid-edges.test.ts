@@ -282,3 +282,11 @@ describe('the remembered grids', () => {
     forgetLastGrids();
   });
 });
+
+describe('the fewest points (grid.ts doc: "n = 2, cranking and redline; with n = 1, cranking alone; with none, none")', () => {
+  it('gives cranking alone for one point, and an empty sweep for none (it once looped for ever there)', () => {
+    expect(Array.from(sweepRpm(fourCylinder, 1))).toEqual([180]);
+    expect(sweepRpm(fourCylinder, 0).length).toBe(0);
+    expect(sweepRpm(fourCylinder, -3).length).toBe(0);
+  });
+});
