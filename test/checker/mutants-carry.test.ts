@@ -20,19 +20,21 @@ function gridOf(rpm: readonly number[]): RpmGrid {
   };
 }
 const RPM = [180, 800, 1500, 2700, 4000, 5300, 6000, 6600];
-const G = gridOf(RPM);
+// A new grid object in each test: the weights are remembered per grid object (a WeakMap), and a
+// grid kept between tests would hand a later test the weights an earlier one worked out.
 /** A smooth, curved temperature against rpm (any quadratic will do). */
 const quad = (x: number): number => 400 + 0.09 * x - 6e-6 * x * x;
 const line = (x: number): number => 350 + 0.05 * x;
 
 describe('the carry weights: the Lagrange basis of the three points before each point', () => {
-  const w = carryWeightsOf(G);
   it('has three per point, zero for the first three (no three points before them)', () => {
+    const w = carryWeightsOf(gridOf(RPM));
     expect(w.length).toBe(3 * RPM.length);
     for (let k = 0; k < 9; k++) expect(w[k]).toBe(0);
   });
   for (let i = 3; i < RPM.length; i++) {
     it(`at point ${i} (${RPM[i]} rpm) each weight is L_j(x_0) worked here, and they carry a quadratic exactly`, () => {
+      const w = carryWeightsOf(gridOf(RPM));
       const [x0, x1, x2, x3] = [RPM[i]!, RPM[i - 1]!, RPM[i - 2]!, RPM[i - 3]!];
       const L1 = ((x0 - x2) * (x0 - x3)) / ((x1 - x2) * (x1 - x3));
       const L2 = ((x0 - x1) * (x0 - x3)) / ((x2 - x1) * (x2 - x3));
@@ -46,13 +48,22 @@ describe('the carry weights: the Lagrange basis of the three points before each 
     });
   }
   it('is worked out once per grid (the same array the next time)', () => {
-    expect(carryWeightsOf(G)).toBe(w);
+    const g = gridOf(RPM);
+    const w = carryWeightsOf(g);
+    expect(carryWeightsOf(g)).toBe(w);
     expect(carryWeightsOf(gridOf(RPM))).not.toBe(w);
   });
 });
 
 describe('the start of each point\'s solution', () => {
-  const w = carryWeightsOf(G);
+  // Weights worked here by Lagrange's form (not by the code under test), for the grid above.
+  const w = new Float64Array(3 * RPM.length);
+  for (let i = 3; i < RPM.length; i++) {
+    const [x0, x1, x2, x3] = [RPM[i]!, RPM[i - 1]!, RPM[i - 2]!, RPM[i - 3]!];
+    w[3 * i] = ((x0 - x2) * (x0 - x3)) / ((x1 - x2) * (x1 - x3));
+    w[3 * i + 1] = ((x0 - x1) * (x0 - x3)) / ((x2 - x1) * (x2 - x3));
+    w[3 * i + 2] = ((x0 - x1) * (x0 - x2)) / ((x3 - x1) * (x3 - x2));
+  }
   const NaN_ = Number.NaN;
   it('before any answer: the hot idle value given', () => {
     expect(carriedStartK(w, 5, NaN_, NaN_, NaN_, false, 5300, 4000, 2700, 612.5)).toBe(612.5);

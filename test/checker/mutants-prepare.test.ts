@@ -86,28 +86,29 @@ const missing = (what: string, fallback: string): string => `${what} is missing 
 describe('points behind a ceramic ballast on a dynamo car idling below cut-in', () => {
   // Ballast coil 1.5 ohm / 5 mH, ceramic 1.6 ohm, harness 0.15, contact 0.12, 15 degC air, 70 degC under the bonnet.
   const setup = pointsSetup({ coil: ballastCoil(), ballast: ceramic(1.6) });
-  const p = prep(dynamoCar, setup);
+  // Prepared inside each test (not when the file loads), so a planted mutant is seen.
+  const P = (): PreparedSetup => prep(dynamoCar, setup);
   const coilCold = cu(1.5, 15);
   const coilHot = cu(1.5, 70);
   const rRun = coilHot + 0.15 + 0.12 + 1.6;
 
   it('copper law hot and cold; series sums running and cold (Ohm)', () => {
-    close(p.coilColdOhm, coilCold, 1e-12, 'coil cold');
-    close(p.coilHotOhm, coilHot, 1e-12, 'coil hot');
-    expect(p.contactOhm).toBe(0.12);
-    expect(p.harnessOhm).toBe(0.15);
-    close(p.rRunningOhm, rRun, 1e-12, 'running R');
-    close(p.rColdOhm, coilCold + 0.15 + 0.12 + 1.6, 1e-12, 'cold R');
-    expect(p.ballastHotOhm).toBe(1.6);
-    expect(p.ironBallast).toBeNull();
+    close(P().coilColdOhm, coilCold, 1e-12, 'coil cold');
+    close(P().coilHotOhm, coilHot, 1e-12, 'coil hot');
+    expect(P().contactOhm).toBe(0.12);
+    expect(P().harnessOhm).toBe(0.15);
+    close(P().rRunningOhm, rRun, 1e-12, 'running R');
+    close(P().rColdOhm, coilCold + 0.15 + 0.12 + 1.6, 1e-12, 'cold R');
+    expect(P().ballastHotOhm).toBe(1.6);
+    expect(P().ironBallast).toBeNull();
   });
 
   it('final currents on the running and resting supplies (Ohm, no switch drop with points)', () => {
-    expect(p.runningSupplyV).toBe(14.2);
-    expect(p.restingSupplyV).toBe(12.5);
-    close(p.iFinalRunningA, 14.2 / rRun, 1e-12, 'running I');
-    close(p.iFinalRestingA, 12.5 / rRun, 1e-12, 'resting I');
-    close(p.tauRunningS, 0.005 / rRun, 1e-12, 'tau');
+    expect(P().runningSupplyV).toBe(14.2);
+    expect(P().restingSupplyV).toBe(12.5);
+    close(P().iFinalRunningA, 14.2 / rRun, 1e-12, 'running I');
+    close(P().iFinalRestingA, 12.5 / rRun, 1e-12, 'resting I');
+    close(P().tauRunningS, 0.005 / rRun, 1e-12, 'tau');
   });
 
   it('the ceramic ballast settles at T_amb + theta <i^2> R, charged at idle from the resting battery (below cut-in)', () => {
@@ -117,12 +118,12 @@ describe('points behind a ceramic ballast on a dynamo car idling below cut-in', 
     const iF = 12.5 / rRun; // the resting battery: idle 800 rpm < cut-in 1100 rpm
     const tau = 0.005 / rRun;
     const ms = (iF * iF * rampSquare(td, tau)) / period;
-    close(p.ballastHotK, K(70) + 10 * ms * 1.6, 1e-9, 'ballast hot K');
-    close(p.ballastColdK, K(15), 1e-12, 'ballast cold K');
+    close(P().ballastHotK, K(70) + 10 * ms * 1.6, 1e-9, 'ballast hot K');
+    close(P().ballastColdK, K(15), 1e-12, 'ballast cold K');
   });
 
   it('the points float rpm is the engine\'s', () => {
-    expect(p.floatRpm).toBe(5200);
+    expect(P().floatRpm).toBe(5200);
   });
 });
 
@@ -165,14 +166,15 @@ describe('the supply the coil sees at idle', () => {
 
 describe('a magneto', () => {
   const mag = pointsSetup({ switching: 'magneto', magneto: { ratedCurrentA: 4, fullOutputRpm: 1500 }, ballast: ceramic(1.6) });
-  const p = prep(dynamoCar, mag);
+  // Prepared inside each test (not when the file loads), so a planted mutant is seen.
+  const P = (): PreparedSetup => prep(dynamoCar, mag);
   it('has no battery supply and no battery current; its contact is still the points contact', () => {
-    expect([p.runningSupplyV, p.crankingSupplyV, p.restingSupplyV, p.iFinalRunningA, p.iFinalRestingA]).toEqual([0, 0, 0, 0, 0]);
-    expect(p.contactOhm).toBe(0.12);
-    expect(p.floatRpm).toBeNull();
+    expect([P().runningSupplyV, P().crankingSupplyV, P().restingSupplyV, P().iFinalRunningA, P().iFinalRestingA]).toEqual([0, 0, 0, 0, 0]);
+    expect(P().contactOhm).toBe(0.12);
+    expect(P().floatRpm).toBeNull();
   });
   it('a ballast on a magneto is not heated by the battery: it stays at the surroundings', () => {
-    close(p.ballastHotK, K(15), 1e-12, 'magneto ballast');
+    close(P().ballastHotK, K(15), 1e-12, 'magneto ballast');
   });
   it('a magneto without its rating is an issue', () => {
     expect(prep(dynamoCar, pointsSetup({ switching: 'magneto', magneto: null })).issues).toContain('A magneto needs its rated break current and the rpm of full output.');
