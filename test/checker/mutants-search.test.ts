@@ -118,8 +118,9 @@ function reference(input: SearchInput): Reference {
       const fails = report.rules.filter((r) => r.verdict === 'fail').map((r) => r.id);
       if (fails.length > 0 && input.shelf && fails.every((id) => TACH_RULES.has(id) || LEADS_PLUG_RULES.has(id))) {
         // Pairs in order (today's first, leads outer, plugs inner); in each, today's tach, then the shelf's in order.
-        let pick: { t: number; l: number; p: number; setup: SetupSpec; report: SetupReport } | null = null;
-        let todayPair: typeof pick = null;
+        type Choice = { t: number; l: number; p: number; setup: SetupSpec; report: SetupReport };
+        let pick: Choice | null = null;
+        let todayPair: Choice | null = null;
         for (const l of choices(input.leads, input.shelf.leads)) {
           for (const p of choices(input.plug, input.shelf.plugs)) {
             for (const t of choices(input.tach, input.shelf.tachs)) {
