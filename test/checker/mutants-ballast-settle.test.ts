@@ -18,32 +18,14 @@
 import { describe, expect, it } from 'vitest';
 import { RunningBallast } from '../../electron/checker/ballast.js';
 import { DwellMode, type DwellParams } from '../../electron/checker/timing.js';
+import { ironRho, simpson } from './worked-laws.js';
 
 // ---------------------------------------------------------------- the laws, worked here
 
-/** Iron resistivity, micro-ohm cm, against kelvin (the code's table, from memory, restated). */
-const IRON: ReadonlyArray<readonly [number, number]> = [
-  [200, 5.2], [273, 8.57], [293, 9.61], [300, 9.98], [400, 16.1], [500, 23.7], [600, 32.9], [700, 44.0],
-  [800, 57.1], [900, 72.4], [1000, 87.0], [1100, 103.0], [1200, 112.0],
-];
-function rho(t: number): number {
-  let i = 1;
-  while (i < IRON.length - 1 && t > IRON[i]![0]) i++;
-  const [t0, r0] = IRON[i - 1]!;
-  const [t1, r1] = IRON[i]!;
-  return r0 + ((r1 - r0) * (t - t0)) / (t1 - t0);
-}
+const rho = ironRho;
 /** Ballast resistance at T from its 20 degC (293.15 K) value, in proportion to the resistivity. */
 const ballastOhm = (cold: number, t: number): number => (cold * rho(t)) / rho(293.15);
 
-/** Simpson's rule over [a, b] with n (even) intervals. */
-function simpson(f: (t: number) => number, a: number, b: number, n = 20_000): number {
-  if (!(b > a)) return 0;
-  const h = (b - a) / n;
-  let s = f(a) + f(b);
-  for (let k = 1; k < n; k++) s += (k % 2 === 1 ? 4 : 2) * f(a + k * h);
-  return (s * h) / 3;
-}
 
 /** Integral over [0, t] of (1 - e^(-u/tau))^2 du = t - 2 tau (1 - e^(-t/tau)) + (tau/2)(1 - e^(-2t/tau)). */
 const rampSquareIntegral = (t: number, tau: number): number => t - 2 * tau * (1 - Math.exp(-t / tau)) + (tau / 2) * (1 - Math.exp((-2 * t) / tau));

@@ -8,17 +8,11 @@
  */
 import { describe, expect, it } from 'vitest';
 import { carriedStartK, carryWeightsOf } from '../../electron/checker/sweep.js';
-import type { RpmGrid } from '../../electron/checker/grid.js';
+import { gridOf as handGrid } from './worked-laws.js';
 
 /** A hand-made grid with uneven rpm steps: carryWeightsOf reads only `n` and `rpm`. */
-function gridOf(rpm: readonly number[]): RpmGrid {
-  const n = rpm.length;
-  const z = (): Float64Array => new Float64Array(n);
-  return {
-    n, rpm: Float64Array.from(rpm), cranking: new Uint8Array(n), resting: new Uint8Array(n), sparkRateHz: z(), periodS: z(),
-    sparkAngleDegBtdc: z(), pressurePa: z(), temperatureK: z(), densityFactor: z(),
-  };
-}
+const gridOf = (rpm: readonly number[]) => handGrid({ rpm });
+
 const RPM = [180, 800, 1500, 2700, 4000, 5300, 6000, 6600];
 // A new grid object in each test: the weights are remembered per grid object (a WeakMap), and a
 // grid kept between tests would hand a later test the weights an earlier one worked out.

@@ -17,15 +17,8 @@ import { prepareSetup } from '../../electron/checker/prepare.js';
 import { checkSetup } from '../../electron/checker/index.js';
 import { createSession } from '../../electron/checker/session.js';
 import { cdModule, fourCylinder, module, moduleSetup, pointsSetup } from './fixtures.js';
+import { simpson } from './worked-laws.js';
 
-/** Simpson's rule over [a, b] with n (even) intervals. */
-function simpson(f: (t: number) => number, a: number, b: number, n = 20_000): number {
-  if (!(b > a)) return 0;
-  const h = (b - a) / n;
-  let s = f(a) + f(b);
-  for (let k = 1; k < n; k++) s += (k % 2 === 1 ? 4 : 2) * f(a + k * h);
-  return (s * h) / 3;
-}
 
 /** Mean square of the charging current by quadrature: the ramp to the limit, then the limit held. */
 function meanSquareByQuadrature(iF: number, tau: number, dwell: number, period: number, limit: number): number {

@@ -22,33 +22,16 @@ import { buildGrids, sweepRpm, type RpmGrid } from '../../electron/checker/grid.
 import { resolveConditions } from '../../electron/checker/conditions.js';
 import type { EngineSpec, PlugSpec } from '../../electron/checker/types.js';
 import { fourCylinder } from './fixtures.js';
+import { airV, gridOf, ironRho, paschenV } from './worked-laws.js';
 
 // ---------------------------------------------------------------- the gap
 
-/** A hand-made grid: the gap code reads only the density factor of each point. */
-function gridOf(df: readonly number[]): RpmGrid {
-  const n = df.length;
-  const z = (): Float64Array => new Float64Array(n);
-  return {
-    n, rpm: z(), cranking: new Uint8Array(n), resting: new Uint8Array(n), sparkRateHz: z(), periodS: z(),
-    sparkAngleDegBtdc: z(), pressurePa: z(), temperatureK: z(), densityFactor: Float64Array.from(df),
-  };
-}
 
-/** Empirical air breakdown, volts, x the reduced gap in cm: 1000 (24.22 x + 6.08 sqrt x). */
-const airV = (x: number): number => 1000 * (24.22 * x + 6.08 * Math.sqrt(x));
-/** Paschen's law, volts, at pd = 760 x Torr cm, held at its minimum left of it. */
-const LN_LN = Math.log(Math.log(1 + 1 / 0.01));
-const PD_MIN = Math.exp(1 + LN_LN) / 15;
-const paschenV = (x: number): number => {
-  const pd = Math.max(760 * x, PD_MIN);
-  return (365 * pd) / (Math.log(15 * pd) - LN_LN);
-};
 
 // Five points: cranking then four running speeds; the reserve is worst at index 3 (worked below).
 const DF = [1.2, 9, 12, 10, 7];
 const AV = Float64Array.from([14000, 30000, 34000, 28000, 22000]);
-const G = gridOf(DF);
+const G = gridOf({ densityFactor: DF });
 
 /** Available / required at each point for a gap (metres), computed in the same order as the law reads. */
 function ratios(gapM: number, law: (x: number) => number, polarity: number, last = DF.length - 1): number[] {
@@ -209,18 +192,7 @@ describe('the suggested gap: the largest meeting the margin, rounded down to 0.0
 
 // ---------------------------------------------------------------- the ballast
 
-/** Iron resistivity, micro-ohm cm, against kelvin (the code's table, from memory, restated). */
-const IRON: ReadonlyArray<readonly [number, number]> = [
-  [200, 5.2], [273, 8.57], [293, 9.61], [300, 9.98], [400, 16.1], [500, 23.7], [600, 32.9], [700, 44.0],
-  [800, 57.1], [900, 72.4], [1000, 87.0], [1100, 103.0], [1200, 112.0],
-];
-function rho(t: number): number {
-  let i = 1;
-  while (i < IRON.length - 1 && t > IRON[i]![0]) i++;
-  const [t0, r0] = IRON[i - 1]!;
-  const [t1, r1] = IRON[i]!;
-  return r0 + ((r1 - r0) * (t - t0)) / (t1 - t0);
-}
+const rho = ironRho;
 /** Ballast resistance at T from its 20 degC (293.15 K) value, resistance in proportion to resistivity. */
 const ballastOhm = (cold: number, t: number): number => (cold * rho(t)) / rho(293.15);
 

@@ -13,10 +13,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { airLawEdgeGapM, gapMeetsMargin, largestMeetingGapM, suggestGap } from '../../electron/checker/gap.js';
-import type { RpmGrid } from '../../electron/checker/grid.js';
+import { airV, gridOf } from './worked-laws.js';
 
-/** Empirical air breakdown, volts, for a reduced gap x in cm (breakdown.ts, worked here). */
-const airV = (x: number): number => 1000 * (24.22 * x + 6.08 * Math.sqrt(x));
 
 describe('the edge gap one point sets under the empirical air law', () => {
   const cases = [
@@ -143,17 +141,8 @@ describe('the largest whole 0.01 mm step that meets, by bisection', () => {
 });
 
 describe('whether a gap meets the margin: each point read once, from the hinted one round', () => {
-  /** A hand-made grid: the gap code reads only the density factor of each point. */
-  function gridOf(df: readonly number[]): RpmGrid {
-    const n = df.length;
-    const z = (): Float64Array => new Float64Array(n);
-    return {
-      n, rpm: z(), cranking: new Uint8Array(n), resting: new Uint8Array(n), sparkRateHz: z(), periodS: z(),
-      sparkAngleDegBtdc: z(), pressurePa: z(), temperatureK: z(), densityFactor: Float64Array.from(df),
-    };
-  }
   const DF = [2, 3, 4, 5, 6];
-  const G = gridOf(DF);
+  const G = gridOf({ densityFactor: DF });
   const GAP = 0.8e-3;
   /** Available voltage that gives `ratio` at point i for the 0.8 mm gap, by the law. */
   const availableFor = (ratios: readonly number[]): Float64Array => Float64Array.from(ratios.map((r, i) => r * airV(GAP * 100 * DF[i]!)));
@@ -187,7 +176,7 @@ describe('whether a gap meets the margin: each point read once, from the hinted 
     expect(gapMeetsMargin(G, one, 4, GAP, false, 1, 1.2, 0)).toBe(true);
     // A NaN point is skipped, as the full scan's comparison skips it.
     const nan = Float64Array.from([Number.NaN, ...availableFor([1.5, 1.5, 1.5, 1.5]).slice(0, 4)]);
-    expect(gapMeetsMargin(gridOf([2, 2, 3, 4, 5]), nan, 4, GAP, false, 1, 1.2, 0)).toBe(true);
+    expect(gapMeetsMargin(gridOf({ densityFactor: [2, 2, 3, 4, 5] }), nan, 4, GAP, false, 1, 1.2, 0)).toBe(true);
   });
   it('a margin not positive (or not a number) is judged by the full scan: NaN never met', () => {
     const av = availableFor([1.5, 1.3, 1.6, 1.4, 1.5]);

@@ -30,21 +30,13 @@ import type { CoilWiring, ConditionInputs, OperatingPoint, SetupSpec } from '../
 import { analyse, createSession, worstReserve, type Session } from '../../electron/checker/session.js';
 import { createWorkspace } from '../../electron/checker/sweep.js';
 import { coil, fourCylinder, pointsSetup } from './fixtures.js';
+import { airV, paschenV } from './worked-laws.js';
 
 const OPTIONS = { rpmPoints: 12 };
 
 /** 1 atm in Pa and the reference temperature of the reduced gap (breakdown.ts). */
 const ATM = 101_325;
 const T_REF = 293;
-/** Empirical air breakdown, volts, x the reduced gap in cm: 1000 (24.22 x + 6.08 sqrt x) (breakdown.ts). */
-const airV = (x: number): number => 1000 * (24.22 * x + 6.08 * Math.sqrt(x));
-/** Paschen's law, volts, at pd = 760 x Torr cm, held at its minimum left of it (breakdown.ts's constants). */
-const LN_LN = Math.log(Math.log(1 + 1 / 0.01));
-const PD_MIN = Math.exp(1 + LN_LN) / 15;
-const paschenV = (x: number): number => {
-  const pd = Math.max(760 * x, PD_MIN);
-  return (365 * pd) / (Math.log(15 * pd) - LN_LN);
-};
 /** A reversed coil needs 1 / 0.9 of the requirement (breakdown.ts). */
 const REVERSED = 1 / 0.9;
 /** The margin when the conditions give none that is positive (conditions.ts, common practice). */
